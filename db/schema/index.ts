@@ -1,0 +1,4 @@
+export * from "./auth";
+export * from "./mail";
+export * from "./fleet";
+export * from "./audit";
