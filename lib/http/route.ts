@@ -1,0 +1,54 @@
+import type { z } from "zod";
+import { AppError, toAppError } from "./errors";
+import { parseWith } from "./validation";
+
+const MAX_JSON_BYTES = 256 * 1024;
+
+/** Reads and validates a JSON body: 400 for a wrong content type, malformed JSON or a wrong shape. */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+  const type = request.headers.get("content-type") ?? "";
+  if (!type.toLowerCase().includes("application/json")) {
+    throw new AppError("invalid_request", "Send the body as JSON with Content-Type: application/json.");
+  }
+  const text = await request.text();
+  if (text.length > MAX_JSON_BYTES) {
+    throw new AppError("invalid_request", `The body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);
+  }
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (err) {
+    const detail = err instanceof SyntaxError ? err.message : "unreadable";
+    throw new AppError("invalid_request", `The body is not valid JSON (${detail}).`);
+  }
+  return parseWith(schema, value, "request body");
+}
+
+/** The JSON body of an error response. */
+export function errorResponse(err: AppError): Response {
+  const headers: Record<string, string> = { "cache-control": "no-store" };
+  if (err.retryAfterSeconds) headers["retry-after"] = String(err.retryAfterSeconds);
+  return Response.json(
+    { error: err.code, message: err.message, ...(err.issues ? { issues: err.issues } : {}) },
+    { status: err.status, headers },
+  );
+}
+
+type Handler<C> = (request: Request, context: C) => Promise<Response>;
+
+/** Wraps a route handler: known errors get their status, anything else is logged and masked as 500. */
+export function handle<C>(fn: Handler<C>): Handler<C> {
+  return async (request, context) => {
+    try {
+      return await fn(request, context);
+    } catch (err) {
+      const known = toAppError(err);
+      if (known) return errorResponse(known);
+      console.error(`[roostline] ${request.method} ${new URL(request.url).pathname} failed`, err);
+      return Response.json(
+        { error: "internal", message: "Something went wrong on our side; it has been logged." },
+        { status: 500, headers: { "cache-control": "no-store" } },
+      );
+    }
+  };
+}
