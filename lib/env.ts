@@ -24,6 +24,7 @@ const envSchema = z.object({
   SMTP_SECURE: flag.default(false),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
+  ROOSTLINE_DEMO: flag.default(false),
   MAIL_FROM: z.string().default("Roostline <no-reply@roostline.invalid>"),
 });
 
