@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray, or, isNull, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { accounts, sessions, users } from "@/db/schema";
+import { sessions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/http/errors";
 import { recordAudit } from "./audit";
@@ -28,7 +28,8 @@ export async function listUsers(): Promise<UserSummary[]> {
       role: users.role,
       banned: users.banned,
       createdAt: users.createdAt,
-      hasPassword: sql<number>`EXISTS (SELECT 1 FROM ${accounts} WHERE ${accounts.userId} = ${users.id} AND ${accounts.providerId} = 'credential')`,
+      // Spelled out: Drizzle drops table names inside a one-table select, which would make this ambiguous.
+      hasPassword: sql<number>`EXISTS (SELECT 1 FROM accounts a WHERE a.user_id = users.id AND a.provider_id = 'credential')`,
     })
     .from(users)
     .orderBy(asc(users.name));
