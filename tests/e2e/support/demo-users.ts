@@ -1,12 +1,13 @@
-// The seeded demo accounts (db/seed/demo.ts); the test database is rebuilt with them.
-import type { Role } from "@/lib/auth/permissions";
+// The seeded demo accounts, one per role (the seed's second reviewer is left out).
+import { demoUsers } from "@/db/seed/demo";
+import { ROLES, type Role } from "@/lib/auth/permissions";
 
-export type DemoUser = { role: Role; email: string; password: string };
+export type DemoUser = (typeof demoUsers)[number];
 
-export const DEMO_USERS: Record<Role, DemoUser> = {
-  admin: { role: "admin", email: "admin@hollowmere.example", password: "roostline-admin" },
-  engineer: { role: "engineer", email: "engineer@hollowmere.example", password: "roostline-engineer" },
-  reviewer: { role: "reviewer", email: "reviewer@hollowmere.example", password: "roostline-reviewer" },
-  technician: { role: "technician", email: "technician@hollowmere.example", password: "roostline-technician" },
-  viewer: { role: "viewer", email: "viewer@hollowmere.example", password: "roostline-viewer" },
-};
+export function demoUser(role: Role): DemoUser {
+  const user = demoUsers.find((u) => u.role === role);
+  if (!user) throw new Error(`the seed has no ${role}`);
+  return user;
+}
+
+export const DEMO_ROLES = ROLES;
