@@ -3,6 +3,8 @@ set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 export ROOT
 export NEXT_TELEMETRY_DISABLED=1
+# mariadbd lives in /usr/sbin, which a non-login shell may not have on its PATH.
+export PATH="$PATH:/usr/local/sbin:/usr/sbin:/sbin"
 DATA_DIR="$ROOT/.data"
 DB_DIR="$DATA_DIR/mariadb"
 DB_PORT="${ROOSTLINE_DB_PORT:-3317}"

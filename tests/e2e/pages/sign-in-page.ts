@@ -26,7 +26,7 @@ export class SignInPage {
 
   async submit(email: string, password: string): Promise<void> {
     await this.form().getByLabel("E-mail").fill(email);
-    await this.form().getByLabel("Password").fill(password);
+    await this.form().getByLabel("Password", { exact: true }).fill(password);
     await this.form().getByRole("button", { name: "Sign in" }).click();
   }
 

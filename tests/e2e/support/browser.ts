@@ -110,6 +110,8 @@ export async function withSession<T>(options: SessionOptions, body: (session: Br
     expect(session.pageErrors, "uncaught errors in the page").toEqual([]);
     return result;
   } finally {
+    const foreign = session.foreignRequests();
+    if (foreign.length > 0) console.error("[e2e] requests to other hosts:", foreign);
     await session.close();
   }
 }

@@ -17,11 +17,11 @@ export function actionId(filename: string, exportedName: string): string {
 /**
  * Posts `[prevState, formData]` to a useActionState action. React's encodeReply sends a
  * multipart body: field "0" holds the argument list, "$K1" points at the FormData, whose
- * entries travel as "1_<name>".
+ * entries travel as "_1_<name>" (react-server-dom: `"_" + partId + "_"`).
  */
 export async function callFormAction(opts: { pagePath: string; id: string; cookie: string; prevState: unknown; fields: Record<string, string> }) {
   const body = new FormData();
-  for (const [name, value] of Object.entries(opts.fields)) body.append(`1_${name}`, value);
+  for (const [name, value] of Object.entries(opts.fields)) body.append(`_1_${name}`, value);
   body.append("0", JSON.stringify([opts.prevState, "$K1"]));
   const response = await fetch(appUrl(opts.pagePath), {
     method: "POST",
