@@ -30,16 +30,20 @@ const envSchema = z.object({
 
 export type Env = z.infer<typeof envSchema>;
 
-let cached: Env | undefined;
-
-/** The validated environment; the only reader of process.env in the app. */
-export function getEnv(): Env {
-  if (cached) return cached;
-  const parsed = envSchema.safeParse(process.env);
+/** Validates an environment, throwing one message that lists every wrong variable. */
+export function parseEnv(source: Record<string, string | undefined>): Env {
+  const parsed = envSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
     throw new Error(`Roostline's environment is not valid:\n${lines.join("\n")}`);
   }
-  cached = parsed.data;
+  return parsed.data;
+}
+
+let cached: Env | undefined;
+
+/** The validated environment; the only reader of process.env in the app. */
+export function getEnv(): Env {
+  cached ??= parseEnv(process.env);
   return cached;
 }

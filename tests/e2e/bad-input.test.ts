@@ -1,12 +1,12 @@
+import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
+import type { Role } from "@/lib/auth/permissions";
 import { ConsoleShell } from "./pages/console-shell";
 import { SignInPage, WRONG_CREDENTIALS } from "./pages/sign-in-page";
 import { appUrl, expectNoStackTrace, uniqueEmail, withSession } from "./support/browser";
 import { userExists } from "./support/db";
 import { demoUser } from "./support/demo-users";
 import { actionId, callFormAction } from "./support/server-action";
-import type { Page } from "playwright-core";
-import type { Role } from "@/lib/auth/permissions";
 
 const INVITE = () => actionId("app/(console)/admin/users/actions.ts", "inviteUserAction");
 
@@ -27,14 +27,14 @@ describe("bad input", () => {
 
       await signIn.submit(demoUser("admin").email, "not-the-password");
       await signIn.error().filter({ hasText: WRONG_CREDENTIALS }).waitFor();
-      const forWrongPassword = await signIn.error().innerText();
+      expect(await signIn.error().innerText()).toBe(WRONG_CREDENTIALS);
       expectNoStackTrace(await page.locator("body").innerText());
 
       // A fresh form, so the alert read below is the answer to the unknown address.
       await signIn.open();
       await signIn.submit(uniqueEmail("nobody"), "not-the-password");
       await signIn.error().filter({ hasText: WRONG_CREDENTIALS }).waitFor();
-      expect(await signIn.error().innerText()).toBe(forWrongPassword);
+      expect(await signIn.error().innerText()).toBe(WRONG_CREDENTIALS);
       expectNoStackTrace(await page.locator("body").innerText());
       expect(new URL(page.url()).pathname).toBe("/sign-in");
     });
