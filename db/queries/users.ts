@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray, or, isNull, sql } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { sessions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/http/errors";
@@ -61,22 +61,25 @@ export async function findUserByEmail({ email }: { email: string }) {
 const LAST_ADMIN = "Roostline needs at least one active admin: make someone else an admin first.";
 
 /**
+ * Locks every active admin row and the target row, in that order (a fixed order avoids deadlocks),
+ * and refuses when the change would take away the last active admin.
+ */
+async function lockForAdminChange(tx: Tx, userId: string, removesAdmin: (target: { role: string; banned: boolean | null }) => boolean) {
+  const admins = await tx.select({ id: users.id }).from(users).where(and(eq(users.role, "admin"), activeFilter)).for("update");
+  const [target] = await tx.select({ id: users.id, role: users.role, banned: users.banned }).from(users).where(eq(users.id, userId)).for("update");
+  if (!target) throw new AppError("not_found", "No such user.");
+  if (removesAdmin(target) && admins.some((a) => a.id === userId) && admins.length <= 1) throw new AppError("conflict", LAST_ADMIN);
+  return target;
+}
+
+/**
  * Changes a user's role. Active admins are locked first, so two admins demoting each other
  * at the same moment cannot leave the system without one.
  */
 export async function changeUserRole({ actorId, userId, role }: { actorId: string; userId: string; role: Role }) {
   await db.transaction(async (tx) => {
-    const admins = await tx
-      .select({ id: users.id })
-      .from(users)
-      .where(and(eq(users.role, "admin"), activeFilter))
-      .for("update");
-    const [target] = await tx.select({ id: users.id, role: users.role }).from(users).where(eq(users.id, userId)).for("update");
-    if (!target) throw new AppError("not_found", "No such user.");
+    const target = await lockForAdminChange(tx, userId, (t) => t.role === "admin" && role !== "admin");
     if (target.role === role) return;
-    if (target.role === "admin" && admins.some((a) => a.id === userId) && admins.length <= 1) {
-      throw new AppError("conflict", LAST_ADMIN);
-    }
     await tx.update(users).set({ role }).where(eq(users.id, userId));
     await recordAudit({ actorId, action: "user.role_changed", subjectType: "user", subjectId: userId, detail: { from: target.role, to: role } }, tx);
   });
@@ -85,15 +88,8 @@ export async function changeUserRole({ actorId, userId, role }: { actorId: strin
 /** Deactivates a user and ends all their sessions at once; refuses to deactivate the last active admin. */
 export async function deactivateUser({ actorId, userId }: { actorId: string; userId: string }) {
   await db.transaction(async (tx) => {
-    const admins = await tx
-      .select({ id: users.id })
-      .from(users)
-      .where(and(eq(users.role, "admin"), activeFilter))
-      .for("update");
-    const [target] = await tx.select({ id: users.id, banned: users.banned }).from(users).where(eq(users.id, userId)).for("update");
-    if (!target) throw new AppError("not_found", "No such user.");
+    const target = await lockForAdminChange(tx, userId, (t) => !t.banned);
     if (target.banned) return;
-    if (admins.some((a) => a.id === userId) && admins.length <= 1) throw new AppError("conflict", LAST_ADMIN);
     await tx.update(users).set({ banned: true, banReason: "deactivated by an admin" }).where(eq(users.id, userId));
     await tx.delete(sessions).where(eq(sessions.userId, userId));
     await recordAudit({ actorId, action: "user.deactivated", subjectType: "user", subjectId: userId }, tx);

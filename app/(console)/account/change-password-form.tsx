@@ -1,17 +1,15 @@
 "use client";
-import { useActionState, useEffect, useRef } from "react";
+import { useActionState } from "react";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/surface";
 import { SubmitButton } from "@/components/ui/submit-button";
+import { useResetOnSuccess } from "@/components/ui/use-reset-on-success";
 import type { ActionResult } from "@/lib/http/action";
 import { changePasswordAction } from "./actions";
 
 export function ChangePasswordForm({ minLength }: { minLength: number }) {
   const [state, action] = useActionState<ActionResult, FormData>(changePasswordAction, { ok: true });
-  const formRef = useRef<HTMLFormElement>(null);
-  useEffect(() => {
-    if (state.ok && state.message) formRef.current?.reset();
-  }, [state]);
+  const formRef = useResetOnSuccess(state);
   const fe = state.ok ? {} : (state.fieldErrors ?? {});
   return (
     <form ref={formRef} action={action} noValidate className="max-w-md space-y-4" aria-label="Change password">

@@ -1,18 +1,16 @@
 "use client";
-import { useActionState, useEffect, useRef } from "react";
+import { useActionState } from "react";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/surface";
 import { SubmitButton } from "@/components/ui/submit-button";
+import { useResetOnSuccess } from "@/components/ui/use-reset-on-success";
 import { ROLE_LABELS, ROLE_SUMMARIES, ROLES } from "@/lib/auth/permissions";
 import type { ActionResult } from "@/lib/http/action";
 import { inviteUserAction } from "./actions";
 
 export function InviteForm() {
   const [state, action] = useActionState<ActionResult, FormData>(inviteUserAction, { ok: true });
-  const formRef = useRef<HTMLFormElement>(null);
-  useEffect(() => {
-    if (state.ok && state.message) formRef.current?.reset();
-  }, [state]);
+  const formRef = useResetOnSuccess(state);
   const fe = state.ok ? {} : (state.fieldErrors ?? {});
   return (
     <form ref={formRef} action={action} noValidate className="space-y-4" aria-label="Invite a colleague">

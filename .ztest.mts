@@ -1,0 +1,12 @@
+import { z } from "zod";
+const num = z.coerce.number({ error: "must be a number" }).positive("must be greater than 0");
+const opt = z.preprocess((v) => (v === "" ? undefined : v), num.optional());
+const s = z.strictObject({ a: num, b: opt, d: z.preprocess((v)=> v===""||v===undefined? undefined: v, z.coerce.number().default(4)) });
+type I = z.infer<typeof s>; type In = z.input<typeof s>;
+const t: I = { a: 1, d: 4 };
+console.log(JSON.stringify(s.safeParse({ a: "1" })));
+console.log(JSON.stringify(s.safeParse({ a: "x", b: "" })));
+console.log(JSON.stringify(s.safeParse({ a: "", b: "-1", zz: 1 })));
+console.log(JSON.stringify(s.safeParse({ a: undefined })));
+console.log(JSON.stringify(s.safeParse({ a: "1e3", b:"0x10" })));
+console.log(JSON.stringify(s.safeParse({ a: " 2 ", b:"Infinity" })));
