@@ -18,7 +18,7 @@ describe("screenshots", () => {
     await withSession({ label: `screenshots-${viewport}-${theme}`, viewport: VIEWPORTS[viewport], theme }, async ({ page }) => {
       const shot = async (name: string) => {
         expect(await page.evaluate(() => document.documentElement.classList.contains("dark"))).toBe(theme === "dark");
-        await page.screenshot({ path: path.join(DIR, `${name}-${viewport}-${theme}.png`), fullPage: true });
+        await page.screenshot({ path: path.join(DIR, `${name}-${viewport}-${theme}.png`) });
       };
       const admin = demoUser("admin");
 

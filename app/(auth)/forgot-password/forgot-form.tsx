@@ -34,7 +34,7 @@ export function ForgotForm() {
     return <Notice tone="good">If that address has a Roostline account, a message with a reset link is on its way.</Notice>;
   }
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Reset password">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Reset password">
       {error && <Notice tone="bad">{error}</Notice>}
       <TextField label="E-mail" name="email" type="email" autoComplete="username" error={fieldError} required />
       <Button type="submit" className="w-full" disabled={state === "pending"}>

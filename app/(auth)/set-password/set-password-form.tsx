@@ -44,7 +44,7 @@ export function SetPasswordForm({ token, minLength }: { token: string; minLength
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Set password">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Set password">
       {error && <Notice tone="bad">{error}</Notice>}
       <TextField label="New password" name="password" type="password" autoComplete="new-password" hint={`At least ${minLength} characters. A short sentence is easy to remember.`} error={fieldErrors.password} required />
       <TextField label="Repeat the password" name="confirm" type="password" autoComplete="new-password" error={fieldErrors.confirm} required />

@@ -39,6 +39,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           <p className="mb-3 text-sm text-loam-600 dark:text-loam-400">
             The demo data belongs to Hollowmere Door Works, an invented controller maker. Each role sees a different menu.
           </p>
+          <div className="overflow-x-auto">
           <table className="w-full text-sm">
             <thead>
               <tr className="text-left text-xs uppercase text-loam-600 dark:text-loam-400">
@@ -57,6 +58,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
               ))}
             </tbody>
           </table>
+          </div>
         </Panel>
       )}
     </div>

@@ -48,7 +48,7 @@ export function SignInForm({ next, defaultEmail = "" }: { next: string; defaultE
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Sign in">
+    <form method="post" onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Sign in">
       {error && <Notice tone="bad">{error}</Notice>}
       <TextField label="E-mail" name="email" type="email" autoComplete="username" defaultValue={defaultEmail} required error={fieldErrors.email} />
       <TextField label="Password" name="password" type="password" autoComplete="current-password" required error={fieldErrors.password} />

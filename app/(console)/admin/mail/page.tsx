@@ -24,7 +24,7 @@ export default async function MailPage() {
       {outbox.length === 0 ? (
         <EmptyState title="Nothing sent yet">Invitations and password resets appear here.</EmptyState>
       ) : (
-        <DataTable caption="Outbox" headers={["Queued", "To", "Kind", "Status", ""]}>
+        <DataTable caption="Outbox" headers={["Queued", "To", "Kind", "Status", "Actions"]}>
           {outbox.map((m) => (
             <tr key={m.id}>
               <Td className="whitespace-nowrap font-mono text-xs tabular-nums">{formatUtc(m.createdAt)}</Td>
