@@ -27,7 +27,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <div className="space-y-3">
           {params.signedOut && <Notice tone="good">You are signed out.</Notice>}
           {params.passwordSet && <Notice tone="good">Your password is set. Sign in with it now.</Notice>}
-          <SignInForm next={next} defaultEmail={typeof params.email === "string" ? params.email.slice(0, 200) : ""} />
+          <SignInForm key={params.email ?? ""} next={next} defaultEmail={typeof params.email === "string" ? params.email.slice(0, 200) : ""} />
         </div>
         <p className="mt-4 text-sm">
           <Link href="/forgot-password">Forgot your password?</Link>
@@ -39,26 +39,17 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           <p className="mb-3 text-sm text-loam-600 dark:text-loam-400">
             The demo data belongs to Hollowmere Door Works, an invented controller maker. Each role sees a different menu.
           </p>
-          <div className="overflow-x-auto">
-          <table className="w-full text-sm">
-            <thead>
-              <tr className="text-left text-xs uppercase text-loam-600 dark:text-loam-400">
-                <th className="py-1 font-semibold">Role</th>
-                <th className="py-1 font-semibold">E-mail</th>
-                <th className="py-1 font-semibold">Password</th>
-              </tr>
-            </thead>
-            <tbody>
-              {demoUsers.map((u) => (
-                <tr key={u.email} className="border-t border-loam-100 dark:border-loam-800">
-                  <td className="py-1 pr-2">{ROLE_LABELS[u.role]}</td>
-                  <td className="py-1 pr-2 font-mono text-xs">{u.email}</td>
-                  <td className="py-1 font-mono text-xs">{u.password}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-          </div>
+          <ul className="divide-y divide-loam-100 text-sm dark:divide-loam-800">
+            {demoUsers.map((u) => (
+              <li key={u.email} className="flex flex-wrap items-baseline justify-between gap-x-3 py-1.5">
+                <span className="w-24 font-medium">{ROLE_LABELS[u.role]}</span>
+                <Link href={`/sign-in?email=${encodeURIComponent(u.email)}`} className="font-mono text-xs" title="Fill in this e-mail address">
+                  {u.email}
+                </Link>
+                <span className="font-mono text-xs text-loam-600 dark:text-loam-400">{u.password}</span>
+              </li>
+            ))}
+          </ul>
         </Panel>
       )}
     </div>
