@@ -13,7 +13,7 @@ const VARIANTS: Record<ButtonVariant, string> = {
 /** Class names for a button look, also used on links styled as buttons. */
 export function buttonClass(variant: ButtonVariant = "primary", size: "sm" | "md" = "md"): string {
   const pad = size === "sm" ? "px-2.5 py-1 text-sm" : "px-3.5 py-2 text-sm";
-  return `inline-flex items-center justify-center gap-1.5 rounded-md font-medium no-underline hover:no-underline transition-colors disabled:cursor-not-allowed disabled:opacity-60 ${pad} ${VARIANTS[variant]}`;
+  return `inline-flex items-center justify-center gap-1.5 whitespace-nowrap rounded-md font-medium no-underline hover:no-underline transition-colors disabled:cursor-not-allowed disabled:opacity-60 ${pad} ${VARIANTS[variant]}`;
 }
 
 export function Button({

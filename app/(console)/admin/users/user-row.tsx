@@ -9,7 +9,7 @@ import { changeRoleAction, deactivateUserAction, reactivateUserAction, resendInv
 type Props = { id: string; name: string; email: string; role: Role; status: "invited" | "active" | "deactivated"; isSelf: boolean };
 
 const STATUS_TONE = { invited: "warn", active: "good", deactivated: "neutral" } as const;
-const STATUS_LABEL = { invited: "Invited, no password yet", active: "Active", deactivated: "Deactivated" } as const;
+const STATUS_LABEL = { invited: "Invited", active: "Active", deactivated: "Deactivated" } as const;
 
 function Result({ state }: { state: ActionResult }) {
   if (state.ok && !state.message) return null;
