@@ -1,4 +1,5 @@
 import { debounceCommand, stallCommand, travelCommand } from "./drive-commands";
+import { sunCommand } from "./sun-command";
 import type { CliCommand } from "./types";
 
 // Each calculation registers its command here.
@@ -6,4 +7,5 @@ export const COMMANDS: Record<string, CliCommand> = {
   travel: travelCommand,
   stall: stallCommand,
   debounce: debounceCommand,
+  sun: sunCommand,
 };

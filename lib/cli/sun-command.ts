@@ -1,6 +1,6 @@
 import { parseArgs } from "node:util";
 import { EVENT_LABELS, sunDay, type EventKind, type SunDay } from "@/lib/sun/events";
-import { clockTime, formatDuration, yearCsv } from "@/lib/sun/format";
+import { clockTime, formatDuration, YEAR_CSV_HEADER, yearCsv } from "@/lib/sun/format";
 import { sunQuerySchema } from "@/lib/sun/inputs";
 import { sunYear } from "@/lib/sun/year";
 import { CliError, kebabFlag, parseCliInput, type CliCommand } from "./types";
@@ -10,7 +10,7 @@ const USAGE = `Usage:
   roostline sun --lat N --lon N --year YYYY --tz ZONE [--json]
 
 Civil dawn, sunrise, solar noon, sunset and civil dusk for a site on a local calendar day, or for
-every day of a year (CSV: ${"date,civil_dawn,sunrise,sunset,civil_dusk,day_length_min"}).
+every day of a year (CSV: ${YEAR_CSV_HEADER}; empty cell where an event does not occur).
 
   --lat   latitude in degrees, north positive (-90 to 90)
   --lon   longitude in degrees, east positive (-180 to 180)
