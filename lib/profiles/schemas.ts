@@ -1,0 +1,90 @@
+// The parameter-set schemas and their validators. Runs in the browser as well as on the server:
+// the schemas are bundled as JSON imports, nothing is fetched ($id values are never resolved).
+import Ajv2020, { type ValidateFunction } from "ajv/dist/2020";
+import addFormats from "ajv-formats";
+import v1Schema from "@/schemas/door-params-v1.schema.json";
+import v2Schema from "@/schemas/door-params-v2.schema.json";
+import type { DoorParamsV1 } from "@/schemas/generated/door-params-v1";
+import type { DoorParamsV2 } from "@/schemas/generated/door-params-v2";
+import { describeError } from "./messages";
+
+export type { DoorParamsV1, DoorParamsV2 };
+export type ParamsVersion = 1 | 2;
+export type ParamsByVersion = { 1: DoorParamsV1; 2: DoorParamsV2 };
+
+export const PARAMS_VERSIONS = [1, 2] as const satisfies readonly ParamsVersion[];
+export const LATEST_PARAMS_VERSION: ParamsVersion = 2;
+
+export type SchemaEntry = { version: ParamsVersion; id: string; schema: Record<string, unknown> };
+
+export const SCHEMA_CATALOG: readonly SchemaEntry[] = [
+  { version: 1, id: v1Schema.$id, schema: v1Schema },
+  { version: 2, id: v2Schema.$id, schema: v2Schema },
+];
+
+/** The catalog entry for one parameter-set version; throws for a version we do not have. */
+export function getSchema(version: ParamsVersion): SchemaEntry {
+  const entry = SCHEMA_CATALOG.find((e) => e.version === version);
+  if (!entry) throw new Error(`no parameter schema for version ${String(version)}`);
+  return entry;
+}
+
+/** True when the name is a time zone this runtime's Intl knows, in IANA Area/Location spelling. */
+export function isKnownTimeZone(name: string): boolean {
+  // Offsets such as "+01:00" are accepted by newer engines as zones, but firmware needs a rule set.
+  if (!/^[A-Za-z][A-Za-z0-9_+-]*(\/[A-Za-z0-9_+-]+)*$/.test(name)) return false;
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone: name });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** A fresh ajv instance with our annotation keywords and formats, in strict mode. */
+export function createParamsAjv(): Ajv2020 {
+  // verbose: errors carry their schema node, so messages can name the unit and the allowed values.
+  const ajv = new Ajv2020({ allErrors: true, strict: true, discriminator: true, verbose: true });
+  addFormats(ajv);
+  ajv.addKeyword({ keyword: "roostlineUnit", schemaType: "string" });
+  ajv.addKeyword({ keyword: "roostlineSafety", schemaType: "boolean" });
+  ajv.addFormat("iana-time-zone", { type: "string", validate: isKnownTimeZone });
+  return ajv;
+}
+
+let sharedAjv: Ajv2020 | null = null;
+const validators = new Map<ParamsVersion, ValidateFunction>();
+
+function validatorFor(version: ParamsVersion): ValidateFunction {
+  let validate = validators.get(version);
+  if (!validate) {
+    sharedAjv ??= createParamsAjv();
+    validate = sharedAjv.compile(getSchema(version).schema);
+    validators.set(version, validate);
+  }
+  return validate;
+}
+
+export type ValidationIssue = {
+  /** ajv's instancePath: a JSON Pointer to the offending value, "" for the document itself. */
+  path: string;
+  keyword: string;
+  message: string;
+  /** The property named by a required / additionalProperties issue (which sits at the parent's path). */
+  property?: string;
+};
+
+export type ValidationResult = { ok: boolean; issues: ValidationIssue[] };
+
+/** Checks a document against one parameter-set version; every issue has a plain-language message. */
+export function validateParams(version: ParamsVersion, value: unknown): ValidationResult {
+  const validate = validatorFor(version);
+  if (validate(value)) return { ok: true, issues: [] };
+  const issues = (validate.errors ?? []).map(describeError);
+  return { ok: false, issues };
+}
+
+/** Type guard form of validateParams. */
+export function isValidParams<V extends ParamsVersion>(version: V, value: unknown): value is ParamsByVersion[V] {
+  return validatorFor(version)(value) === true;
+}
