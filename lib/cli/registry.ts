@@ -1,5 +1,6 @@
 import { debounceCommand, stallCommand, travelCommand } from "./drive-commands";
 import { sunCommand } from "./sun-command";
+import { timecodeCommand } from "./timecode-command";
 import type { CliCommand } from "./types";
 
 // Each calculation registers its command here.
@@ -8,4 +9,5 @@ export const COMMANDS: Record<string, CliCommand> = {
   stall: stallCommand,
   debounce: debounceCommand,
   sun: sunCommand,
+  timecode: timecodeCommand,
 };

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { decodeFrame, encodeFrame, STANDARD_LABELS } from "@/lib/timecode/frames";
+import { decodeFrame, describeFlags, encodeFrame, STANDARD_LABELS } from "@/lib/timecode/frames";
 import { decodeInputSchema, distanceInputSchema, encodeInputSchema, pulseLogInputSchema } from "@/lib/timecode/inputs";
 import { parsePulseCsv } from "@/lib/timecode/pulse-csv";
 import { decodePulseLog, type PulseLogResult } from "@/lib/timecode/pulses";
@@ -20,8 +20,17 @@ encode prints the frame that names the minute of --time (DCF77 and MSF send it t
 pulses reads a CSV log "start_ms,width_ms" (one pulse a line) and reports each minute frame.
 Add --json for the full result.`;
 
+// parseArgs reads "--lon -104.99" as two options; join a negative number to its option first.
+const joinNegatives = (args: string[]) =>
+  args.reduce<string[]>((out, a, i) => {
+    const prev = args[i - 1];
+    if (/^-\d/.test(a) && prev?.startsWith("--") && !prev.includes("=")) out[out.length - 1] = `${prev}=${a}`;
+    else out.push(a);
+    return out;
+  }, []);
+
 const parse = (args: string[], names: string[]) =>
-  parseArgs({ args, options: Object.fromEntries(names.map((n) => [n, { type: "string" as const }])), strict: true, allowPositionals: false }).values;
+  parseArgs({ args: joinNegatives(args), options: Object.fromEntries(names.map((n) => [n, { type: "string" as const }])), strict: true, allowPositionals: false }).values;
 
 function decodeText(r: FrameDecode): string {
   const failed = r.checks.filter((c) => !c.ok);
@@ -30,9 +39,7 @@ function decodeText(r: FrameDecode): string {
   const when = i.local
     ? `Names ${i.local}${i.zone ? ` (${i.zone})` : ""}${i.utc && i.zone !== "UTC" ? ` = ${i.utc}` : ""}, the ${r.names}`
     : `Fields: ${i.year}-${i.month}-${i.day} ${i.hour}:${i.minute} (not a valid time)`;
-  const flags = Object.entries(r.flags)
-    .filter(([, v]) => v !== false && v !== undefined && v !== null)
-    .map(([k, v]) => (v === true ? k : `${k} ${v}`));
+  const flags = describeFlags(r.flags);
   const checks = r.checks.map((c) => `  ${c.ok ? "ok    " : "FAILED"}  ${c.label} (${c.detail})`);
   return [head, when, ...(flags.length ? [`Flags: ${flags.join(", ")}`] : []), "Checks:", ...checks].join("\n");
 }
