@@ -2,3 +2,4 @@ export * from "./auth";
 export * from "./mail";
 export * from "./fleet";
 export * from "./audit";
+export * from "./profiles";

@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { waitForHydration } from "../support/browser";
 
-export const LINK_USED = "This link has expired or has already been used.";
+export const LINK_USED = "This link has expired or has already been used";
 
 /** /set-password: where an invitee or a reset link chooses a password. */
 export class SetPasswordPage {
