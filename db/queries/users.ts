@@ -48,6 +48,12 @@ export async function getUser({ userId }: { userId: string }): Promise<UserSumma
   return (await listUsers()).find((u) => u.id === userId) ?? null;
 }
 
+/** Name and e-mail of a user, or null. */
+export async function findUserById({ userId }: { userId: string }) {
+  const [row] = await db.select({ id: users.id, name: users.name, email: users.email }).from(users).where(eq(users.id, userId)).limit(1);
+  return row ?? null;
+}
+
 /** Looks a user up by e-mail (case-insensitive). */
 export async function findUserByEmail({ email }: { email: string }) {
   const [row] = await db

@@ -1,5 +1,6 @@
 import { db } from "@/db/client";
 import { doorModels, sites } from "@/db/schema";
+import { syncSchemaCatalog } from "@/db/queries/profiles";
 import { findUserByEmail } from "@/db/queries/users";
 import { getAuth } from "@/lib/auth/auth";
 import { demoDoorModels, demoSites, demoUsers } from "./demo";
@@ -7,6 +8,7 @@ import { demoDoorModels, demoSites, demoUsers } from "./demo";
 /** Writes the demo scenario; safe to run again (existing rows are updated, existing users kept). */
 export async function seedDemo(log: (line: string) => void = () => {}) {
   const auth = getAuth();
+  await syncSchemaCatalog();
   for (const u of demoUsers) {
     if (await findUserByEmail({ email: u.email })) continue;
     // Seed only: no headers, so better-auth skips its admin check for the very first admin.

@@ -8,6 +8,7 @@ export const PERMISSIONS = [
   "profiles:read",
   "profiles:edit",
   "reviews:decide",
+  "reviews:comment",
   "controllers:read",
   "controllers:manage",
   "calibrations:upload",
@@ -26,8 +27,8 @@ const READ: Permission[] = ["dashboard:read", "profiles:read", "controllers:read
 
 const TABLE: Record<Role, readonly Permission[]> = {
   viewer: READ,
-  engineer: [...READ, "profiles:edit"],
-  reviewer: [...READ, "reviews:decide", "audit:read"],
+  engineer: [...READ, "profiles:edit", "reviews:comment"],
+  reviewer: [...READ, "reviews:decide", "reviews:comment", "audit:read"],
   technician: [...READ, "controllers:manage", "calibrations:upload", "sites:manage"],
   admin: PERMISSIONS,
 };

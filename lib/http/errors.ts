@@ -2,6 +2,7 @@
 
 export type ErrorCode =
   | "invalid_request"
+  | "invalid_profile"
   | "unauthenticated"
   | "forbidden"
   | "not_found"
@@ -11,6 +12,7 @@ export type ErrorCode =
 
 const STATUS: Record<ErrorCode, number> = {
   invalid_request: 400,
+  invalid_profile: 400,
   unauthenticated: 401,
   forbidden: 403,
   not_found: 404,
