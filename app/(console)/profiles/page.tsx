@@ -1,44 +1,94 @@
 import type { Metadata } from "next";
-import { DataTable, EmptyState, PageHeader, Td } from "@/components/ui/surface";
-import { listDoorModels } from "@/db/queries/fleet";
+import Link from "next/link";
+import { NewProfileForm } from "@/components/profiles/new-profile-form";
+import { StateBadge } from "@/components/profiles/state-badge";
+import { Badge, DataTable, EmptyState, PageHeader, Panel, Td } from "@/components/ui/surface";
+import { listDoorModels, listSites } from "@/db/queries/fleet";
+import { listProfiles, listSchemaVersions } from "@/db/queries/profiles";
 import { requirePageUser } from "@/lib/auth/guard";
+import { hasPermission } from "@/lib/auth/permissions";
 
 export const metadata: Metadata = { title: "Profiles" };
 
+const LAYER_LABEL = { base: "Base", site: "Site overlay", controller: "Controller overlay" } as const;
+
 export default async function ProfilesPage() {
-  await requirePageUser("profiles:read");
-  const models = await listDoorModels();
+  const user = await requirePageUser("profiles:read");
+  const [profiles, models, sites, versions] = await Promise.all([listProfiles(), listDoorModels(), listSites(), listSchemaVersions()]);
+  const canEdit = hasPermission(user.role, "profiles:edit");
   return (
     <>
       <PageHeader
         title="Profiles"
-        intro="Each door model carries a base parameter profile; sites and single controllers may override parts of it. Below are the door models and the drive trains their profiles are computed from."
+        intro="A door model's base profile holds its parameters; a site overlay changes only what differs at one site. Every save is a revision; only approved revisions ever reach a controller."
       />
-      {models.length === 0 ? (
-        <EmptyState title="No door models yet">Add a door model with its spool, gearbox and encoder; its base profile starts from those numbers.</EmptyState>
-      ) : (
-        <DataTable caption="Door models" headers={["Model", "Door (W × travel)", "Spool / cord", "Gearbox", "Encoder", "Motor"]}>
-          {models.map((m) => (
-            <tr key={m.id}>
-              <Td>
-                <span className="font-medium">{m.name}</span>
-                <span className="block font-mono text-xs text-loam-600 dark:text-loam-400">{m.code}</span>
-              </Td>
-              <Td className="tabular-nums">
-                {m.doorWidthMm} × {m.doorTravelMm} mm
-              </Td>
-              <Td className="tabular-nums">
-                Ø {m.spoolDiameterMm} mm / {m.cordDiameterMm} mm
-              </Td>
-              <Td className="tabular-nums">{m.gearboxRatio} : 1</Td>
-              <Td className="tabular-nums">
-                {m.encoderPulsesPerRev} PPR, {m.encoderDecoding.replace("x", "×")}
-              </Td>
-              <Td className="tabular-nums">{m.motorNoLoadRpm} rpm no-load</Td>
-            </tr>
-          ))}
-        </DataTable>
-      )}
+      <div className={`grid gap-6 ${canEdit ? "xl:grid-cols-[1fr_24rem]" : ""}`}>
+        <div className="space-y-6">
+          {profiles.length === 0 ? (
+            <EmptyState title="No profiles yet">{canEdit ? "Start a base profile for a door model with the form beside this list." : "An engineer starts a base profile for each door model."}</EmptyState>
+          ) : (
+            <DataTable caption="Profiles" headers={["Profile", "Layer", "Applies to", "Newest revision", "Parameter set"]}>
+              {profiles.map((p) => (
+                <tr key={p.id}>
+                  <Td>
+                    <Link href={`/profiles/${p.id}`} className="font-medium">
+                      {p.name}
+                    </Link>
+                  </Td>
+                  <Td>{LAYER_LABEL[p.layer]}</Td>
+                  <Td>{[p.doorModelName, p.siteName].filter(Boolean).join(" at ") || "—"}</Td>
+                  <Td>
+                    {p.headNumber ? (
+                      <span className="inline-flex items-center gap-2">
+                        r{p.headNumber} <StateBadge state={p.headState ?? "draft"} />
+                      </span>
+                    ) : (
+                      "—"
+                    )}
+                  </Td>
+                  <Td>
+                    <Badge>v{p.schemaVersion}</Badge>
+                  </Td>
+                </tr>
+              ))}
+            </DataTable>
+          )}
+          <section>
+            <h2 className="mb-2 text-lg font-semibold">Door models</h2>
+            <DataTable caption="Door models" headers={["Model", "Door (W × travel)", "Spool / cord", "Gearbox", "Encoder", "Motor"]}>
+              {models.map((m) => (
+                <tr key={m.id}>
+                  <Td>
+                    <span className="font-medium">{m.name}</span>
+                    <span className="block font-mono text-xs text-loam-600 dark:text-loam-400">{m.code}</span>
+                  </Td>
+                  <Td className="tabular-nums">
+                    {m.doorWidthMm} × {m.doorTravelMm} mm
+                  </Td>
+                  <Td className="tabular-nums">
+                    Ø {m.spoolDiameterMm} mm / {m.cordDiameterMm} mm
+                  </Td>
+                  <Td className="tabular-nums">{m.gearboxRatio} : 1</Td>
+                  <Td className="tabular-nums">
+                    {m.encoderPulsesPerRev} PPR, {m.encoderDecoding.replace("x", "×")}
+                  </Td>
+                  <Td className="tabular-nums">{m.motorNoLoadRpm} rpm no-load</Td>
+                </tr>
+              ))}
+            </DataTable>
+          </section>
+        </div>
+        {canEdit && (
+          <Panel>
+            <h2 className="mb-3 text-lg font-semibold">New profile</h2>
+            <NewProfileForm
+              doorModels={models.map((m) => ({ value: String(m.id), label: `${m.name} (${m.code})` }))}
+              sites={sites.map((s) => ({ value: String(s.id), label: s.name }))}
+              versions={versions.map((v) => ({ value: String(v.version), label: `Version ${v.version}` }))}
+            />
+          </Panel>
+        )}
+      </div>
     </>
   );
 }

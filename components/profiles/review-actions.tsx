@@ -1,0 +1,116 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/surface";
+import { apiJson } from "@/lib/http/client-fetch";
+
+type PathOption = { path: string; label: string };
+
+/** Approve / request changes (bound to the hash on screen) and comments anchored to a parameter. */
+export function ReviewActions({ revisionId, contentHash, canDecide, canComment, paths, safetyRelevant }: { revisionId: number; contentHash: string; canDecide: boolean; canComment: boolean; paths: PathOption[]; safetyRelevant: boolean }) {
+  const router = useRouter();
+  const [comment, setComment] = useState("");
+  const [note, setNote] = useState("");
+  const [path, setPath] = useState(paths[0]?.path ?? "");
+  const [error, setError] = useState<string | null>(null);
+  const [fieldError, setFieldError] = useState<string | undefined>();
+  const [done, setDone] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function decide(decision: "approve" | "request_changes") {
+    setError(null);
+    setFieldError(undefined);
+    if (decision === "request_changes" && !comment.trim()) {
+      setFieldError("Say what should change.");
+      return;
+    }
+    if (decision === "approve" && safetyRelevant && !window.confirm("This change touches safety-relevant parameters. Controllers will move doors with animals nearby on what you approve. Approve?")) return;
+    setBusy(true);
+    const r = await apiJson<{ state: string; approvals: number; required: number }>(`/api/v1/revisions/${revisionId}/decision`, { body: { decision, contentHash, comment: comment.trim() || undefined } });
+    setBusy(false);
+    if (!r.ok) {
+      setError(r.error.message);
+      return;
+    }
+    setDone(r.data.state === "approved" ? "Approved." : r.data.state === "changes_requested" ? "Sent back to the author." : `Your approval is recorded (${r.data.approvals} of ${r.data.required}).`);
+    router.refresh();
+  }
+
+  async function addComment() {
+    setError(null);
+    if (!note.trim()) return;
+    setBusy(true);
+    const r = await apiJson(`/api/v1/revisions/${revisionId}/comments`, { body: { path, body: note } });
+    setBusy(false);
+    if (!r.ok) {
+      setError(r.error.message);
+      return;
+    }
+    setNote("");
+    router.refresh();
+  }
+
+  return (
+    <div className="space-y-4">
+      {error && <Notice tone="bad">{error}</Notice>}
+      {done && <Notice tone="good">{done}</Notice>}
+      {canComment && (
+        <div className="space-y-2">
+          <h3 className="font-semibold">Comment on a parameter</h3>
+          <label htmlFor="comment-path" className="block text-sm font-medium">
+            Parameter
+          </label>
+          <select id="comment-path" value={path} onChange={(e) => setPath(e.target.value)} className="block w-full rounded-md border border-loam-200 bg-white px-2 py-1.5 text-sm dark:border-loam-800 dark:bg-loam-900">
+            {paths.map((p) => (
+              <option key={p.path} value={p.path}>
+                {p.label}
+              </option>
+            ))}
+          </select>
+          <label htmlFor="comment-body" className="block text-sm font-medium">
+            Comment
+          </label>
+          <textarea id="comment-body" rows={2} value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} className="block w-full rounded-md border border-loam-200 bg-white px-3 py-2 text-sm dark:border-loam-800 dark:bg-loam-900" />
+          <Button variant="secondary" size="sm" onClick={addComment} disabled={busy || !note.trim()}>
+            Add comment
+          </Button>
+        </div>
+      )}
+      {canDecide && (
+        <div className="space-y-2 border-t border-loam-200 pt-4 dark:border-loam-800">
+          <h3 className="font-semibold">Your decision</h3>
+          <label htmlFor="decision-comment" className="block text-sm font-medium">
+            Note to the author (needed when sending back)
+          </label>
+          <textarea
+            id="decision-comment"
+            rows={3}
+            value={comment}
+            onChange={(e) => setComment(e.target.value)}
+            maxLength={2000}
+            aria-invalid={fieldError ? true : undefined}
+            aria-describedby={fieldError ? "decision-comment-error" : undefined}
+            className="block w-full rounded-md border border-loam-200 bg-white px-3 py-2 text-sm dark:border-loam-800 dark:bg-loam-900"
+          />
+          {fieldError && (
+            <p id="decision-comment-error" role="alert" className="text-sm text-ember-700 dark:text-ember-100">
+              {fieldError}
+            </p>
+          )}
+          <p className="text-xs text-loam-600 dark:text-loam-400">
+            Your decision applies to content <code className="font-mono">{contentHash.slice(0, 12)}…</code>; any later revision needs a fresh review.
+          </p>
+          <div className="flex gap-2">
+            <Button onClick={() => decide("approve")} disabled={busy}>
+              Approve
+            </Button>
+            <Button variant="secondary" onClick={() => decide("request_changes")} disabled={busy}>
+              Send back
+            </Button>
+          </div>
+        </div>
+      )}
+    </div>
+  );
+}
