@@ -165,7 +165,7 @@ export interface SunFollowingSchedule {
    * Minutes after sunrise the door opens; negative opens before sunrise.
    * Unit: min.
    * Range -120 to 240.
-   * Default: 0.
+   * Default: 30.
    */
   openOffsetMin: number;
   /**
@@ -173,7 +173,7 @@ export interface SunFollowingSchedule {
    * Minutes after civil dusk (sun 6° below the horizon) the door closes; negative closes before. Most birds are on the roost by civil dusk; 15 to 30 minutes after it is common practice.
    * Unit: min.
    * Range -120 to 120.
-   * Default: 15.
+   * Default: 30.
    * Safety-relevant.
    */
   closeOffsetMin: number;
