@@ -4,6 +4,7 @@ import { syncSchemaCatalog } from "@/db/queries/profiles";
 import { findUserByEmail } from "@/db/queries/users";
 import { getAuth } from "@/lib/auth/auth";
 import { demoDoorModels, demoSites, demoUsers } from "./demo";
+import { seedDemoProfiles } from "./profiles";
 
 /** Writes the demo scenario; safe to run again (existing rows are updated, existing users kept). */
 export async function seedDemo(log: (line: string) => void = () => {}) {
@@ -23,4 +24,5 @@ export async function seedDemo(log: (line: string) => void = () => {}) {
     await db.insert(doorModels).values(m).onDuplicateKeyUpdate({ set: rest });
   }
   log(`${demoSites.length} sites and ${demoDoorModels.length} door models in place`);
+  await seedDemoProfiles(log);
 }

@@ -14,8 +14,22 @@ export async function queuePasswordMail(opts: { userId: string; email: string; n
   void deliverDueMail();
 }
 
+const pending = new Set<Promise<unknown>>();
+
+/** Waits for delivery passes still running (scripts call this before closing the pool). */
+export async function settleMailDelivery(): Promise<void> {
+  while (pending.size) await Promise.allSettled([...pending]);
+}
+
 /** Sends every due outbox message over SMTP; never throws (failures are recorded on the rows). */
-export async function deliverDueMail(): Promise<{ sent: number; failed: number }> {
+export function deliverDueMail(): Promise<{ sent: number; failed: number }> {
+  const pass = deliverPass();
+  pending.add(pass);
+  void pass.finally(() => pending.delete(pass));
+  return pass;
+}
+
+async function deliverPass(): Promise<{ sent: number; failed: number }> {
   const env = getEnv();
   try {
     return await deliverDue({
