@@ -1,4 +1,4 @@
-import { desc, eq } from "drizzle-orm";
+import { and, desc, eq, like, lt, type SQL } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { auditEvents, users } from "@/db/schema";
 
@@ -15,8 +15,15 @@ export async function recordAudit(event: AuditInput, tx: Tx | typeof db = db): P
   await tx.insert(auditEvents).values(event);
 }
 
-/** The newest audit events with the actor's name. */
-export async function listAuditEvents({ limit = 100 }: { limit?: number } = {}) {
+export type AuditFilter = { action?: string; actorEmail?: string; subjectType?: string; beforeId?: number; limit?: number };
+
+/** The newest audit events with the actor's name, optionally filtered; `beforeId` pages back. */
+export async function listAuditEvents({ action, actorEmail, subjectType, beforeId, limit = 100 }: AuditFilter = {}) {
+  const where: SQL[] = [];
+  if (action) where.push(like(auditEvents.action, `${action.replace(/[%_\\]/g, "")}%`));
+  if (actorEmail) where.push(eq(users.email, actorEmail));
+  if (subjectType) where.push(eq(auditEvents.subjectType, subjectType));
+  if (beforeId) where.push(lt(auditEvents.id, beforeId));
   return db
     .select({
       id: auditEvents.id,
@@ -30,6 +37,7 @@ export async function listAuditEvents({ limit = 100 }: { limit?: number } = {}) 
     })
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorId))
+    .where(where.length ? and(...where) : undefined)
     .orderBy(desc(auditEvents.id))
     .limit(limit);
 }

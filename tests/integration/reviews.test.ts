@@ -174,3 +174,21 @@ describe("deciding", () => {
     expect(rows).toHaveLength(1);
   });
 });
+
+describe("audit log API", () => {
+  it("filters by action and exports CSV for reviewers, and refuses engineers", async () => {
+    const { GET: auditRoute } = await import("@/app/api/v1/audit/route");
+    const reviewer = await signedInUser("reviewer");
+    const engineer = await signedInUser("engineer");
+    const { revisionId } = await draft(engineer);
+    const json = await (await auditRoute(jsonRequest(`/api/v1/audit?action=profile.&actor=${encodeURIComponent(engineer.email)}`, reviewer.cookie, "GET"), {})).json();
+    expect(json.events.length).toBe(1);
+    expect(json.events[0]).toMatchObject({ action: "profile.created", actorEmail: engineer.email });
+    const csv = await auditRoute(jsonRequest(`/api/v1/audit?format=csv&actor=${encodeURIComponent(engineer.email)}`, reviewer.cookie, "GET"), {});
+    expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
+    expect((await csv.text()).split("\r\n")[0]).toBe("id,time,actor,actor_email,action,subject_type,subject_id,detail");
+    expect((await auditRoute(jsonRequest("/api/v1/audit", engineer.cookie, "GET"), {})).status).toBe(403);
+    expect((await auditRoute(jsonRequest("/api/v1/audit?limit=0", reviewer.cookie, "GET"), {})).status).toBe(400);
+    expect(revisionId).toBeGreaterThan(0);
+  });
+});
