@@ -131,11 +131,6 @@ export function RevisionWorkspace(props: Props) {
               </p>
             )}
           </div>
-          {submittable && (
-            <Button variant="secondary" onClick={openSubmit} disabled={busy}>
-              Submit r{props.revisionNumber} for review…
-            </Button>
-          )}
         </div>
       )}
       {submitOpen && (
