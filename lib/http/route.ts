@@ -10,6 +10,10 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S)
   if (!type.toLowerCase().includes("application/json")) {
     throw new AppError("invalid_request", "Send the body as JSON with Content-Type: application/json.");
   }
+  const declared = Number(request.headers.get("content-length") ?? 0);
+  if (declared > MAX_JSON_BYTES) {
+    throw new AppError("invalid_request", `The body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);
+  }
   const text = await request.text();
   if (text.length > MAX_JSON_BYTES) {
     throw new AppError("invalid_request", `The body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);

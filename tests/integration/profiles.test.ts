@@ -108,3 +108,33 @@ describe("profiles and revisions", () => {
     expect(cmp.safetyChanged).toBe(true);
   });
 });
+
+describe("migration and limits", () => {
+  it("migrates a version 1 base profile to version 2 as a new draft that passes the new schema", async () => {
+    const { POST: migrateRoute } = await import("@/app/api/v1/profiles/[profileId]/migrate/route");
+    const v1 = (await import("@/tests/fixtures/profiles/v1-base-henhouse-350.json")).default;
+    const engineer = await signedInUser("engineer");
+    const model = await createDoorModel();
+    const created = await createProfileRoute(jsonRequest("/api/v1/profiles", engineer.cookie, "POST", { layer: "base", name: `Old ${model.code}`, doorModelId: model.id, schemaVersion: 1, content: v1 }), {});
+    expect(created.status).toBe(201);
+    const { profileId, revisionId } = await created.json();
+    const res = await migrateRoute(jsonRequest(`/api/v1/profiles/${profileId}/migrate`, engineer.cookie, "POST", { parentRevisionId: revisionId }), params("profileId", profileId));
+    expect(res.status).toBe(201);
+    const { revisionId: migrated } = await res.json();
+    const [rev] = await db.select().from(profileRevisions).where(eq(profileRevisions.id, migrated));
+    expect(rev).toMatchObject({ schemaVersion: 2, number: 2, state: "draft" });
+    expect((rev!.content as { stall: { thresholdCps: number } }).stall.thresholdCps).toBe(v1.stallThresholdCps);
+    const again = await migrateRoute(jsonRequest(`/api/v1/profiles/${profileId}/migrate`, engineer.cookie, "POST", { parentRevisionId: migrated }), params("profileId", profileId));
+    expect(again.status).toBe(409);
+  });
+
+  it("refuses a 10 MB body with a clear 400 and saves nothing", async () => {
+    const engineer = await signedInUser("engineer");
+    const { profileId, revisionId } = await newBase(engineer.cookie);
+    const huge = JSON.stringify({ parentRevisionId: revisionId, message: "Huge", content: { ...baseDocument(), padding: "x".repeat(10 * 1024 * 1024) } });
+    const res = await save(engineer.cookie, profileId, huge);
+    expect(res.status).toBe(400);
+    expect((await res.json()).message).toMatch(/larger than 256 KiB/);
+    expect(await db.select().from(profileRevisions).where(eq(profileRevisions.profileId, profileId))).toHaveLength(1);
+  });
+});

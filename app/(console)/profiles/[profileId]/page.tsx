@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { MigrateButton } from "@/components/profiles/migrate-button";
 import { RevisionWorkspace } from "@/components/profiles/revision-workspace";
 import { StateBadge } from "@/components/profiles/state-badge";
 import { Badge, DataTable, Notice, PageHeader, Panel, Td } from "@/components/ui/surface";
@@ -59,6 +60,11 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
       {profile.layer !== "base" && !context.base && <Notice tone="warn">This door model has no base profile yet, so the overlay cannot be checked. Create the base first.</Notice>}
       {profile.layer !== "base" && context.base && !context.base.approved && (
         <Notice tone="warn">The base profile has no approved revision yet; the checks below use its newest draft.</Notice>
+      )}
+      {canEdit && profile.schemaVersion === 1 && (
+        <div className="mb-4">
+          <MigrateButton profileId={id} revisionId={head.id} />
+        </div>
       )}
       <div className="mt-4 grid gap-6 2xl:grid-cols-[1fr_22rem]">
         <RevisionWorkspace
