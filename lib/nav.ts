@@ -13,6 +13,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/audit", label: "Audit", permission: "audit:read", description: "Who changed what, and when" },
   { href: "/admin/users", label: "People", permission: "users:manage", description: "Invite colleagues and set their roles" },
   { href: "/admin/mail", label: "Mail", permission: "mail:read", description: "Outgoing mail and the local capture" },
+  { href: "/admin/settings", label: "Settings", permission: "settings:manage", description: "Team rules such as approvals for safety changes" },
 ];
 
 /** The navigation a role may see. */

@@ -20,6 +20,7 @@ export const PERMISSIONS = [
   "tokens:manage",
   "releases:manage",
   "mail:read",
+  "settings:manage",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 

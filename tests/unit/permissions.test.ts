@@ -21,7 +21,7 @@ describe("role → permission table", () => {
   });
 
   it("keeps people, device tokens, releases and mail with admins alone", () => {
-    for (const p of ["users:manage", "tokens:manage", "releases:manage", "mail:read"] as const) {
+    for (const p of ["users:manage", "tokens:manage", "releases:manage", "mail:read", "settings:manage"] as const) {
       expect(ROLES.filter((r) => hasPermission(r, p))).toEqual(["admin"]);
     }
   });
