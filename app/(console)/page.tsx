@@ -2,6 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { EmptyState, PageHeader, Panel } from "@/components/ui/surface";
 import { getOverviewCounts, listSites } from "@/db/queries/fleet";
+import { listMyOpenRevisions, listReviewQueue } from "@/db/queries/reviews";
+import { StateBadge } from "@/components/profiles/state-badge";
+import { hasPermission } from "@/lib/auth/permissions";
 import { requirePageUser } from "@/lib/auth/guard";
 import { ROLE_SUMMARIES } from "@/lib/auth/permissions";
 import { navFor } from "@/lib/nav";
@@ -11,7 +14,12 @@ export const metadata: Metadata = { title: "Overview" };
 
 export default async function OverviewPage() {
   const user = await requirePageUser("dashboard:read");
-  const [counts, sites] = await Promise.all([getOverviewCounts(), listSites()]);
+  const [counts, sites, queue, mine] = await Promise.all([
+    getOverviewCounts(),
+    listSites(),
+    hasPermission(user.role, "reviews:decide") ? listReviewQueue({ reviewerId: user.id }) : Promise.resolve([]),
+    hasPermission(user.role, "profiles:edit") ? listMyOpenRevisions({ authorId: user.id }) : Promise.resolve([]),
+  ]);
   const now = new Date();
   const areas = navFor(user.role).filter((n) => n.href !== "/");
   return (
@@ -22,6 +30,23 @@ export default async function OverviewPage() {
         <Stat label="Door models" value={counts.doorModels} href="/profiles" />
         <Stat label="People with access" value={counts.people} href={user.role === "admin" ? "/admin/users" : undefined} />
       </div>
+      {(queue.length > 0 || mine.length > 0) && (
+        <Panel className="mt-6">
+          <h2 className="mb-3 text-lg font-semibold">Waiting for you</h2>
+          <ul className="space-y-2 text-sm">
+            {queue.map((q) => (
+              <li key={`q${q.revisionId}`}>
+                Review <Link href={`/reviews/${q.revisionId}`}>{q.profileName} r{q.number}</Link> by {q.authorName ?? "—"}: {q.message}
+              </li>
+            ))}
+            {mine.map((m) => (
+              <li key={`m${m.revisionId}`}>
+                Your <Link href={`/profiles/${m.profileId}`}>{m.profileName} r{m.number}</Link> <StateBadge state={m.state} />
+              </li>
+            ))}
+          </ul>
+        </Panel>
+      )}
       <div className="mt-6 grid gap-6 lg:grid-cols-2">
         <Panel>
           <h2 className="mb-3 text-lg font-semibold">Local time at each site</h2>
