@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { EffectiveTable } from "@/components/profiles/effective-table";
 import { MigrateButton } from "@/components/profiles/migrate-button";
 import { RevisionWorkspace } from "@/components/profiles/revision-workspace";
 import { StateBadge } from "@/components/profiles/state-badge";
@@ -103,6 +104,13 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
               ))}
             </ul>
           </Panel>
+          {profile.layer !== "base" && context.base && context.base.schemaVersion === head.schemaVersion && (
+            <Panel>
+              <h2 className="mb-1 font-semibold">Effective at {profile.siteName ?? "this site"}</h2>
+              <p className="mb-2 text-xs text-loam-600 dark:text-loam-400">The base profile's {context.base.approved ? "approved" : "newest"} revision with this overlay&apos;s r{head.number} on top.</p>
+              <EffectiveTable version={head.schemaVersion as 1 | 2} layers={[{ layer: "base", values: context.base.content }, { layer: profile.layer, values: head.content }]} />
+            </Panel>
+          )}
           <Panel>
             <h2 className="mb-2 font-semibold">Revisions</h2>
             <DataTable caption="Revisions" headers={["#", "State", "By", "What"]}>
