@@ -107,7 +107,7 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
           {profile.layer !== "base" && context.base && context.base.schemaVersion === head.schemaVersion && (
             <Panel>
               <h2 className="mb-1 font-semibold">Effective at {profile.siteName ?? "this site"}</h2>
-              <p className="mb-2 text-xs text-loam-600 dark:text-loam-400">The base profile's {context.base.approved ? "approved" : "newest"} revision with this overlay&apos;s r{head.number} on top.</p>
+              <p className="mb-2 text-xs text-loam-600 dark:text-loam-400">The base profile&apos;s {context.base.approved ? "approved" : "newest"} revision with this overlay&apos;s r{head.number} on top.</p>
               <EffectiveTable version={head.schemaVersion as 1 | 2} layers={[{ layer: "base", values: context.base.content }, { layer: profile.layer, values: head.content }]} />
             </Panel>
           )}
