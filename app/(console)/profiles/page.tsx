@@ -1,20 +1,17 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { NewProfileForm } from "@/components/profiles/new-profile-form";
-import { StateBadge } from "@/components/profiles/state-badge";
-import { Badge, DataTable, EmptyState, PageHeader, Panel, Td } from "@/components/ui/surface";
+import { ProfileList } from "@/components/profiles/profile-list";
+import { DataTable, PageHeader, Panel, Td } from "@/components/ui/surface";
 import { listDoorModels, listSites } from "@/db/queries/fleet";
-import { listProfiles, listSchemaVersions } from "@/db/queries/profiles";
+import { listSchemaVersions } from "@/db/queries/profiles";
 import { requirePageUser } from "@/lib/auth/guard";
 import { hasPermission } from "@/lib/auth/permissions";
 
 export const metadata: Metadata = { title: "Profiles" };
 
-const LAYER_LABEL = { base: "Base", site: "Site overlay", controller: "Controller overlay" } as const;
-
 export default async function ProfilesPage() {
   const user = await requirePageUser("profiles:read");
-  const [profiles, models, sites, versions] = await Promise.all([listProfiles(), listDoorModels(), listSites(), listSchemaVersions()]);
+  const [models, sites, versions] = await Promise.all([listDoorModels(), listSites(), listSchemaVersions()]);
   const canEdit = hasPermission(user.role, "profiles:edit");
   return (
     <>
@@ -24,35 +21,7 @@ export default async function ProfilesPage() {
       />
       <div className={`grid gap-6 ${canEdit ? "xl:grid-cols-[1fr_24rem]" : ""}`}>
         <div className="space-y-6">
-          {profiles.length === 0 ? (
-            <EmptyState title="No profiles yet">{canEdit ? "Start a base profile for a door model with the form beside this list." : "An engineer starts a base profile for each door model."}</EmptyState>
-          ) : (
-            <DataTable caption="Profiles" headers={["Profile", "Layer", "Applies to", "Newest revision", "Parameter set"]}>
-              {profiles.map((p) => (
-                <tr key={p.id}>
-                  <Td>
-                    <Link href={`/profiles/${p.id}`} className="font-medium">
-                      {p.name}
-                    </Link>
-                  </Td>
-                  <Td>{LAYER_LABEL[p.layer]}</Td>
-                  <Td>{[p.doorModelName, p.siteName].filter(Boolean).join(" at ") || "—"}</Td>
-                  <Td>
-                    {p.headNumber ? (
-                      <span className="inline-flex items-center gap-2">
-                        r{p.headNumber} <StateBadge state={p.headState ?? "draft"} />
-                      </span>
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                  <Td>
-                    <Badge>v{p.schemaVersion}</Badge>
-                  </Td>
-                </tr>
-              ))}
-            </DataTable>
-          )}
+          <ProfileList canEdit={canEdit} />
           <section>
             <h2 className="mb-2 text-lg font-semibold">Door models</h2>
             <DataTable caption="Door models" headers={["Model", "Door (W × travel)", "Spool / cord", "Gearbox", "Encoder", "Motor"]}>
