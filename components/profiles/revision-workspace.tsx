@@ -32,6 +32,7 @@ export function RevisionWorkspace(props: Props) {
   const [busy, setBusy] = useState(false);
   const [submitOpen, setSubmitOpen] = useState(false);
   const [reasons, setReasons] = useState<Record<string, string>>({});
+  const [reasonErrors, setReasonErrors] = useState<Record<string, string>>({});
   const submittable = props.state === "draft" || props.state === "changes_requested";
 
   async function save(text: string) {
@@ -75,6 +76,13 @@ export function RevisionWorkspace(props: Props) {
   const errors = (latest.current?.findings ?? []).filter((f) => f.severity === "error");
 
   async function submit() {
+    setError(null);
+    const short = warnings.filter((w) => (reasons[w.ruleId] ?? "").trim().length < 10).map((w) => w.ruleId);
+    setReasonErrors(Object.fromEntries(short.map((id) => [id, "Give a reason of at least 10 characters."])));
+    if (short.length) {
+      document.getElementById(`ack-${short[0]}`)?.focus();
+      return;
+    }
     setBusy(true);
     const acknowledgements = warnings.map((w) => ({ ruleId: w.ruleId, reason: reasons[w.ruleId] ?? "" }));
     const result = await apiJson<{ requiredApprovals: number }>(`/api/v1/revisions/${props.revisionId}/submit`, { body: { acknowledgements } });
@@ -109,6 +117,9 @@ export function RevisionWorkspace(props: Props) {
             </p>
           )}
         </Notice>
+      )}
+      {props.canEdit && props.state === "in_review" && (
+        <Notice tone="info">r{props.revisionNumber} is with the reviewers. Saving a change now replaces it with a new draft, and its review starts over.</Notice>
       )}
       {props.canEdit && (
         <div className="flex flex-wrap items-end gap-3">
@@ -161,17 +172,24 @@ export function RevisionWorkspace(props: Props) {
                   <textarea
                     id={`ack-${w.ruleId}`}
                     rows={2}
+                    aria-invalid={reasonErrors[w.ruleId] ? true : undefined}
+                    aria-describedby={reasonErrors[w.ruleId] ? `ack-${w.ruleId}-error` : undefined}
                     value={reasons[w.ruleId] ?? ""}
                     onChange={(e) => setReasons((r) => ({ ...r, [w.ruleId]: e.target.value }))}
                     className="mt-1 block w-full rounded-md border border-loam-200 bg-white px-3 py-2 text-sm dark:border-loam-800 dark:bg-loam-900"
                   />
+                  {reasonErrors[w.ruleId] && (
+                    <p id={`ack-${w.ruleId}-error`} role="alert" className="mt-1 text-sm text-ember-700 dark:text-ember-100">
+                      {reasonErrors[w.ruleId]}
+                    </p>
+                  )}
                 </div>
               ))}
             </div>
           )}
           <div className="mt-4 flex gap-2">
             <Button onClick={submit} disabled={busy || errors.length > 0}>
-              {busy ? "Submitting…" : "Submit for review"}
+              {busy ? "Submitting…" : `Submit revision ${props.revisionNumber}`}
             </Button>
             <Button variant="ghost" onClick={() => setSubmitOpen(false)}>
               Cancel

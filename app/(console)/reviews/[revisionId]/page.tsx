@@ -54,7 +54,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ revisio
         }
       />
       {revision.authorId === user.id && revision.state === "in_review" && <Notice tone="info">You wrote this revision, so another reviewer decides on it.</Notice>}
-      <div className="mt-4 grid gap-6 xl:grid-cols-[1fr_22rem]">
+      <div className="mt-4 grid gap-6 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
           <Panel>
             <h2 className="mb-1 text-lg font-semibold">Changes {against ? `since approved r${against.number}` : "(nothing approved before)"}</h2>
