@@ -25,6 +25,9 @@ const envSchema = z.object({
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   ROOSTLINE_DEMO: flag.default(false),
+  /** Ed25519 private key (PKCS#8 DER, base64) that signs device configurations. */
+  DEVICE_SIGNING_KEY: z.preprocess((v) => (v === "" ? undefined : v), z.string().regex(/^[A-Za-z0-9+/=]{40,200}$/, "must be a base64 PKCS#8 Ed25519 key").optional()),
+  DEVICE_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).max(100000).default(60),
   MAIL_FROM: z.string().default("Roostline <no-reply@roostline.invalid>"),
 });
 

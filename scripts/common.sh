@@ -37,6 +37,10 @@ ensure_secret() {
     printf 'BETTER_AUTH_SECRET=%s\n' "$(node -e 'console.log(require("crypto").randomBytes(32).toString("base64url"))')" >> "$envfile"
     log "wrote a new random BETTER_AUTH_SECRET to .env.local"
   fi
+  if ! grep -qs '^DEVICE_SIGNING_KEY=' "$envfile"; then
+    printf 'DEVICE_SIGNING_KEY=%s\n' "$(node -e 'const { generateKeyPairSync } = require("crypto"); const { privateKey } = generateKeyPairSync("ed25519"); console.log(privateKey.export({ type: "pkcs8", format: "der" }).toString("base64"))')" >> "$envfile"
+    log "wrote a new Ed25519 device signing key to .env.local"
+  fi
 }
 
 # Installs npm packages when node_modules is missing or older than the lock file.

@@ -23,6 +23,8 @@ export AUTH_RATE_LIMIT=off ROOSTLINE_DEMO=on
 export NEXT_DIST_DIR=".next-test"
 BETTER_AUTH_SECRET="$(grep "^BETTER_AUTH_SECRET=" "$ROOT/.env.local" | tail -1 | cut -d= -f2-)"
 export BETTER_AUTH_SECRET
+DEVICE_SIGNING_KEY="$(grep "^DEVICE_SIGNING_KEY=" "$ROOT/.env.local" | tail -1 | cut -d= -f2-)"
+export DEVICE_SIGNING_KEY
 
 SERVER_PID=""
 cleanup() {

@@ -3,3 +3,4 @@ export * from "./mail";
 export * from "./fleet";
 export * from "./audit";
 export * from "./profiles";
+export * from "./devices";
