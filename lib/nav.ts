@@ -8,6 +8,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/profiles", label: "Profiles", permission: "profiles:read", description: "Door models and their parameter profiles" },
   { href: "/reviews", label: "Reviews", permission: "reviews:decide", description: "Changes waiting for a decision" },
   { href: "/controllers", label: "Controllers", permission: "controllers:read", description: "Installed door controllers" },
+  { href: "/releases", label: "Releases", permission: "controllers:read", description: "Approved revisions on their way to controllers" },
   { href: "/sites", label: "Sites", permission: "sites:read", description: "Farms and houses where doors run" },
   { href: "/tools", label: "Tools", permission: "tools:use", description: "Drive, stall, debounce, sun and time-code calculators" },
   { href: "/audit", label: "Audit", permission: "audit:read", description: "Who changed what, and when" },

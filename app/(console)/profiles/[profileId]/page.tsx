@@ -1,7 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { ReleasePanel } from "@/components/fleet/release-panel";
 import { EffectiveTable } from "@/components/profiles/effective-table";
+import { listSites } from "@/db/queries/fleet";
+import { latestApprovedRevision } from "@/db/queries/profiles";
 import { MigrateButton } from "@/components/profiles/migrate-button";
 import { RevisionWorkspace } from "@/components/profiles/revision-workspace";
 import { StateBadge } from "@/components/profiles/state-badge";
@@ -27,6 +30,8 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
   if (!head) notFound();
   const [decisions, comments] = await Promise.all([listDecisions({ revisionId: head.id }), listComments({ revisionId: head.id })]);
   const canEdit = hasPermission(user.role, "profiles:edit");
+  const canRelease = hasPermission(user.role, "releases:manage") && profile.layer === "base";
+  const [approved, siteList] = canRelease ? await Promise.all([latestApprovedRevision({ profileId: id }), listSites()]) : [null, []];
   const previous = revisions.find((r) => r.number < head.number);
   const safetyContext = {
     ...(context.doorModel ? { doorModel: context.doorModel } : {}),
@@ -81,6 +86,11 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
           canEdit={canEdit}
         />
         <aside className="space-y-4">
+          {canRelease && approved && (
+            <Panel>
+              <ReleasePanel revisionId={approved.id} revisionNumber={approved.number} sites={siteList.map((s) => ({ value: String(s.id), label: s.name }))} />
+            </Panel>
+          )}
           <Panel>
             <h2 className="mb-2 font-semibold">Review of r{head.number}</h2>
             {head.state === "in_review" && (
