@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from "node:crypto";
 import { and, asc, desc, eq, isNull } from "drizzle-orm";
-import { db } from "@/db/client";
+import { db, type Tx } from "@/db/client";
 import { checkIns, controllers, controllerTokens, doorModels, sites } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { recordAudit } from "./audit";
@@ -16,9 +16,10 @@ function newToken(): string {
 
 export type NewController = { actorId: string; serial: string; doorModelId: number; siteId: number; firmwareVersion: string; parameterSetVersion: 1 | 2 };
 
-/** Registers a controller and returns its first token, which is shown once and never stored. */
-export async function createController(input: NewController): Promise<{ controllerId: number; token: string }> {
-  return db.transaction(async (tx) => {
+/** Registers a controller and returns its first token, which is shown once and never stored. Pass `outer` to join a bulk import's transaction. */
+export async function createController(input: NewController, outer?: Tx): Promise<{ controllerId: number; token: string }> {
+  const run = <T>(fn: (tx: Tx) => Promise<T>) => (outer ? fn(outer) : db.transaction(fn));
+  return run(async (tx) => {
     const [dup] = await tx.select({ id: controllers.id }).from(controllers).where(eq(controllers.serial, input.serial)).for("update");
     if (dup) throw new AppError("conflict", `A controller with serial ${input.serial} is already registered.`, { issues: [{ path: "/serial", message: "Already registered" }] });
     const [model] = await tx.select({ id: doorModels.id }).from(doorModels).where(eq(doorModels.id, input.doorModelId));

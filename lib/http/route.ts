@@ -5,18 +5,18 @@ import { parseWith } from "./validation";
 const MAX_JSON_BYTES = 256 * 1024;
 
 /** Reads and validates a JSON body: 400 for a wrong content type, malformed JSON or a wrong shape. */
-export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+export async function readJson<S extends z.ZodType>(request: Request, schema: S, { maxBytes = MAX_JSON_BYTES }: { maxBytes?: number } = {}): Promise<z.infer<S>> {
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().includes("application/json")) {
     throw new AppError("invalid_request", "Send the body as JSON with Content-Type: application/json.");
   }
   const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > MAX_JSON_BYTES) {
-    throw new AppError("invalid_request", `The body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);
+  if (declared > maxBytes) {
+    throw new AppError("invalid_request", `The body is larger than ${maxBytes / 1024} KiB.`);
   }
   const text = await request.text();
-  if (text.length > MAX_JSON_BYTES) {
-    throw new AppError("invalid_request", `The body is larger than ${MAX_JSON_BYTES / 1024} KiB.`);
+  if (text.length > maxBytes) {
+    throw new AppError("invalid_request", `The body is larger than ${maxBytes / 1024} KiB.`);
   }
   let value: unknown;
   try {

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { ImportControllersForm } from "@/components/fleet/import-controllers-form";
 import { RegisterControllerForm } from "@/components/fleet/register-controller-form";
 import { TokenActions } from "@/components/fleet/token-actions";
 import { Badge, DataTable, EmptyState, PageHeader, Panel, Td } from "@/components/ui/surface";
@@ -43,10 +44,16 @@ export default async function ControllersPage() {
           </DataTable>
         )}
         {canRegister && (
-          <Panel>
-            <h2 className="mb-3 text-lg font-semibold">Register a controller</h2>
-            <RegisterControllerForm doorModels={models.map((m) => ({ value: String(m.id), label: `${m.name} (${m.code})` }))} sites={sites.map((s) => ({ value: String(s.id), label: s.name }))} />
-          </Panel>
+          <div className="space-y-6">
+            <Panel>
+              <h2 className="mb-3 text-lg font-semibold">Register a controller</h2>
+              <RegisterControllerForm doorModels={models.map((m) => ({ value: String(m.id), label: `${m.name} (${m.code})` }))} sites={sites.map((s) => ({ value: String(s.id), label: s.name }))} />
+            </Panel>
+            <Panel>
+              <h2 className="mb-3 text-lg font-semibold">Import many</h2>
+              <ImportControllersForm />
+            </Panel>
+          </div>
         )}
       </div>
     </>
