@@ -91,15 +91,21 @@ export async function updateRelease({ actorId, releaseId, change }: { actorId: s
   });
 }
 
-/** The newest approved site overlay revision of a door model for each site. */
+/**
+ * The newest approved overlay revisions of a door model: keyed by site id for site overlays and
+ * by "serial:<serial>" for controller overlays.
+ */
 export async function approvedOverlaysOf({ doorModelId }: { doorModelId: number }): Promise<Record<string, number>> {
   const rows = await db
-    .select({ siteId: profiles.siteId, revisionId: profileRevisions.id, number: profileRevisions.number })
+    .select({ layer: profiles.layer, siteId: profiles.siteId, serial: profiles.controllerSerial, revisionId: profileRevisions.id, number: profileRevisions.number })
     .from(profiles)
     .innerJoin(profileRevisions, eq(profileRevisions.profileId, profiles.id))
-    .where(and(eq(profiles.layer, "site"), eq(profiles.doorModelId, doorModelId), eq(profileRevisions.state, "approved")))
+    .where(and(inArray(profiles.layer, ["site", "controller"]), eq(profiles.doorModelId, doorModelId), eq(profileRevisions.state, "approved")))
     .orderBy(desc(profileRevisions.number));
   const out: Record<string, number> = {};
-  for (const r of rows) if (r.siteId && out[String(r.siteId)] === undefined) out[String(r.siteId)] = r.revisionId;
+  for (const r of rows) {
+    const key = r.layer === "site" ? (r.siteId ? String(r.siteId) : null) : r.serial ? `serial:${r.serial}` : null;
+    if (key && out[key] === undefined) out[key] = r.revisionId;
+  }
   return out;
 }

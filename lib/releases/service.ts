@@ -19,13 +19,20 @@ type ControllerRef = { id: number; serial: string; doorModelId: number; siteId: 
 
 export type Effective = { values: Record<string, unknown>; provenance: Record<string, LayerName>; version: ParamsVersion; baseRevisionId: number; overlayRevisionId: number | null };
 
-/** The configuration a release gives one controller: base, with the pinned overlay of its site on top. */
+/** The configuration a release gives one controller: base ← its site's pinned overlay ← its own pinned overlay. */
 export async function effectiveFor(release: ReleaseRow, controller: ControllerRef): Promise<Effective> {
   const overlayId = release.overlayRevisionIds[String(controller.siteId)] ?? null;
-  const revisions = await getRevisions({ revisionIds: overlayId ? [release.baseRevisionId, overlayId] : [release.baseRevisionId] });
+  const ownId = release.overlayRevisionIds[`serial:${controller.serial}`] ?? null;
+  const ids = [release.baseRevisionId, overlayId, ownId].filter((x): x is number => x !== null);
+  const revisions = await getRevisions({ revisionIds: ids });
   const base = revisions.find((r) => r.id === release.baseRevisionId)!;
   const overlay = overlayId ? revisions.find((r) => r.id === overlayId) : undefined;
-  const layers = [{ layer: "base" as const, values: base.content }, ...(overlay ? [{ layer: "site" as const, values: overlay.content }] : [])];
+  const own = ownId ? revisions.find((r) => r.id === ownId) : undefined;
+  const layers = [
+    { layer: "base" as const, values: base.content },
+    ...(overlay ? [{ layer: "site" as const, values: overlay.content }] : []),
+    ...(own ? [{ layer: "controller" as const, values: own.content }] : []),
+  ];
   const merged = mergeLayers(layers);
   return { values: merged.values, provenance: merged.provenance, version: base.schemaVersion as ParamsVersion, baseRevisionId: base.id, overlayRevisionId: overlay?.id ?? null };
 }
