@@ -7,8 +7,8 @@ import type { ParamsVersion } from "@/lib/profiles/schemas";
 const LAYER_LABEL: Record<LayerName, string> = { base: "base", site: "site overlay", controller: "controller overlay" };
 
 /** The effective configuration (base ← overlay) with the layer that set each parameter. */
-export function EffectiveTable({ version, layers }: { version: ParamsVersion; layers: { layer: LayerName; values: object }[] }) {
-  const { values, provenance } = mergeLayers(layers);
+export function EffectiveTable({ version, layers, merged }: { version: ParamsVersion; layers?: { layer: LayerName; values: object }[]; merged?: { values: object; provenance: Record<string, LayerName> } }) {
+  const { values, provenance } = (merged ?? mergeLayers(layers ?? [])) as { values: Record<string, unknown>; provenance: Record<string, LayerName> };
   const kind = (values.schedule as { kind?: string } | undefined)?.kind ?? null;
   const rows = leafEntries(values as JsonValue);
   return (

@@ -36,7 +36,7 @@ export async function uploadCalibration({ actor, serial, input }: { actor: Sessi
   const suggested = suggestParameters(result.analysis, input.stallFraction ? { stallFraction: input.stallFraction } : {});
   const stored: StoredAnalysis = { analysis: result.analysis, suggested, calibration: calibrationContext(result.analysis) };
   const { runId } = await insertCalibrationRun({ controllerId: controller.id, serial, fileName: input.fileName, csv: input.csv, analysis: stored as unknown as Record<string, unknown>, uploadedBy: actor.id });
-  return { runId, warnings: [...parsed.warnings.map((w) => `row ${w.row}: ${w.message}`), ...result.analysis.warnings], suggested, calibration: stored.calibration };
+  return { runId, warnings: [...parsed.warnings.map((w) => `row ${w.row}: ${w.message}`), ...result.analysis.warnings], suggested, calibration: stored.calibration, series: result.analysis.series };
 }
 
 /**

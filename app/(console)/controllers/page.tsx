@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { ImportControllersForm } from "@/components/fleet/import-controllers-form";
 import { RegisterControllerForm } from "@/components/fleet/register-controller-form";
 import { TokenActions } from "@/components/fleet/token-actions";
@@ -26,7 +27,9 @@ export default async function ControllersPage() {
           <DataTable caption="Controllers" headers={canTokens ? ["Serial", "Site", "Door model", "Firmware", "Running", "Last seen", "Token"] : ["Serial", "Site", "Door model", "Firmware", "Running", "Last seen"]}>
             {controllers.map((c) => (
               <tr key={c.id}>
-                <Td className="font-mono text-xs">{c.serial}</Td>
+                <Td className="font-mono text-xs">
+                  <Link href={`/controllers/${encodeURIComponent(c.serial)}`}>{c.serial}</Link>
+                </Td>
                 <Td>{c.siteName}</Td>
                 <Td>{c.doorModelName}</Td>
                 <Td>
