@@ -4,6 +4,7 @@ import { syncSchemaCatalog } from "@/db/queries/profiles";
 import { findUserByEmail } from "@/db/queries/users";
 import { getAuth } from "@/lib/auth/auth";
 import { demoDoorModels, demoSites, demoUsers } from "./demo";
+import { seedDemoControllers } from "./controllers";
 import { seedDemoProfiles } from "./profiles";
 
 /** Writes the demo scenario; safe to run again (existing rows are updated, existing users kept). */
@@ -25,4 +26,5 @@ export async function seedDemo(log: (line: string) => void = () => {}) {
   }
   log(`${demoSites.length} sites and ${demoDoorModels.length} door models in place`);
   await seedDemoProfiles(log);
+  await seedDemoControllers(log);
 }
