@@ -30,6 +30,8 @@ async function baseFor(doorModelId: number): Promise<Record<string, unknown>> {
   return {
     ...doc,
     closeTravelCounts,
+    // Hollowmere's workshop is in Bavaria: the base suits Central European sites; others get an overlay.
+    timeZone: "Europe/Berlin",
     travelTimeoutMs: Math.ceil((expected * 2.5) / 1000) * 1000,
     stall: { ...(doc.stall as object), thresholdCps: Math.round(nominal * 0.5), windowMs: 100 },
   };
