@@ -57,3 +57,25 @@ describe("controller CSV import", () => {
     expect(headerOnly.status).toBe(400);
   });
 });
+
+describe("sites", () => {
+  it("lets a technician add and change a site, naming wrong fields, and refuses viewers", async () => {
+    const { POST: createSiteRoute } = await import("@/app/api/v1/sites/route");
+    const { PATCH: patchSite } = await import("@/app/api/v1/sites/[siteId]/route");
+    const { params } = await import("@/tests/support/profiles");
+    const tech = await signedInUser("technician");
+    const viewer = await signedInUser("viewer");
+    const slug = `test-${Date.now()}`;
+    const site = { slug, name: "Fell End", latitude: 54.4, longitude: -2.9, timeZone: "Europe/London" };
+    const res = await createSiteRoute(jsonRequest("/api/v1/sites", tech.cookie, "POST", site), {});
+    expect(res.status).toBe(201);
+    const { siteId } = await res.json();
+    expect((await createSiteRoute(jsonRequest("/api/v1/sites", tech.cookie, "POST", site), {})).status).toBe(409);
+    const bad = await createSiteRoute(jsonRequest("/api/v1/sites", tech.cookie, "POST", { ...site, slug: `${slug}-b`, latitude: 95, timeZone: "Mars/Base" }), {});
+    expect(bad.status).toBe(400);
+    expect((await bad.json()).issues.map((i: { path: string }) => i.path).sort()).toEqual(["/latitude", "/timeZone"]);
+    expect((await createSiteRoute(jsonRequest("/api/v1/sites", viewer.cookie, "POST", site), {})).status).toBe(403);
+    const changed = await patchSite(jsonRequest(`/api/v1/sites/${siteId}`, tech.cookie, "PATCH", { ...site, slug: undefined, name: "Fell End Farm" }), params("siteId", siteId));
+    expect(changed.status).toBe(200);
+  });
+});

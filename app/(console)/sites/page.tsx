@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
-import { DataTable, EmptyState, PageHeader, Td } from "@/components/ui/surface";
+import { NewSiteForm } from "@/components/fleet/new-site-form";
+import { DataTable, EmptyState, PageHeader, Panel, Td } from "@/components/ui/surface";
+import { hasPermission } from "@/lib/auth/permissions";
 import { listSites } from "@/db/queries/fleet";
 import { requirePageUser } from "@/lib/auth/guard";
 import { formatLocalTime } from "@/lib/time/local-time";
@@ -11,12 +13,14 @@ function coord(value: number, pos: string, neg: string) {
 }
 
 export default async function SitesPage() {
-  await requirePageUser("sites:read");
+  const user = await requirePageUser("sites:read");
+  const canManage = hasPermission(user.role, "sites:manage");
   const sites = await listSites();
   const now = new Date();
   return (
     <>
       <PageHeader title="Sites" intro="The farms and houses where doors run. A site's position and time zone decide its sunrise and dusk, and so its door times." />
+      <div className={`grid gap-6 ${canManage ? "xl:grid-cols-[minmax(0,1fr)_22rem]" : ""}`}>
       {sites.length === 0 ? (
         <EmptyState title="No sites yet">A technician adds each farm with its coordinates and time zone.</EmptyState>
       ) : (
@@ -34,6 +38,13 @@ export default async function SitesPage() {
           ))}
         </DataTable>
       )}
+      {canManage && (
+        <Panel>
+          <h2 className="mb-3 text-lg font-semibold">Add a site</h2>
+          <NewSiteForm />
+        </Panel>
+      )}
+      </div>
     </>
   );
 }
