@@ -1,3 +1,4 @@
+import type React from "react";
 import type { ReactNode } from "react";
 
 /** A raised panel. */
@@ -85,6 +86,10 @@ export function DataTable({ headers, children, caption }: { headers: string[]; c
   );
 }
 
-export function Td({ children, className = "" }: { children: ReactNode; className?: string }) {
-  return <td className={`px-4 py-2.5 align-top ${className}`}>{children}</td>;
+export function Td({ children, className = "", ...rest }: { children?: ReactNode; className?: string } & Omit<React.TdHTMLAttributes<HTMLTableCellElement>, "className" | "children">) {
+  return (
+    <td className={`px-4 py-2.5 align-top ${className}`} {...rest}>
+      {children}
+    </td>
+  );
 }

@@ -36,7 +36,7 @@ export default async function ControllerPage({ params }: { params: Promise<{ ser
       </p>
       <PageHeader title={controller.serial} intro={`Firmware ${controller.firmwareVersion}, parameter set ${controller.parameterSetVersion}. Last seen ${controller.lastSeenAt ? formatUtc(controller.lastSeenAt) : "never"}.`} />
       {drift && <Notice tone="warn" title="Running something other than assigned">It reports {controller.runningHash!.slice(0, 10)}…, assigned is {assignedHash!.slice(0, 10)}…. It may not have polled since the release, or it refused the configuration: see its check-ins.</Notice>}
-      <div className="mt-4 grid gap-6 xl:grid-cols-2">
+      <div className="mt-4 grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <Panel>
           <h2 className="mb-2 text-lg font-semibold">Assigned configuration</h2>
           {effective && release ? (
