@@ -1,6 +1,6 @@
-import { and, desc, eq, inArray } from "drizzle-orm";
+import { and, desc, eq, gte, inArray, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { controllers, profileRevisions, profiles, releases } from "@/db/schema";
+import { checkIns, controllers, profileRevisions, profiles, releases } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { recordAudit } from "./audit";
 
@@ -108,4 +108,16 @@ export async function approvedOverlaysOf({ doorModelId }: { doorModelId: number 
     if (key && out[key] === undefined) out[key] = r.revisionId;
   }
   return out;
+}
+
+/** Per day since `since`: how many of `controllerIds` reported one of `hashes` applied (for adoption over time). */
+export async function adoptionByDay({ controllerIds, hashes, since }: { controllerIds: number[]; hashes: string[]; since: Date }) {
+  if (!controllerIds.length || !hashes.length) return [];
+  const rows = await db
+    .select({ day: sql<string>`DATE(${checkIns.receivedAt})`, n: sql<number>`COUNT(DISTINCT ${checkIns.controllerId})` })
+    .from(checkIns)
+    .where(and(inArray(checkIns.controllerId, controllerIds), inArray(checkIns.appliedHash, hashes), gte(checkIns.receivedAt, since)))
+    .groupBy(sql`DATE(${checkIns.receivedAt})`)
+    .orderBy(sql`DATE(${checkIns.receivedAt})`);
+  return rows.map((r) => ({ day: String(r.day).slice(0, 10), controllers: Number(r.n) }));
 }

@@ -1,4 +1,4 @@
-import { listControllersOfModel, targetCovers, type ReleaseRow } from "@/db/queries/releases";
+import { adoptionByDay, listControllersOfModel, targetCovers, type ReleaseRow } from "@/db/queries/releases";
 import { inStage } from "@/lib/fleet/stage";
 import { contentHash } from "@/lib/profiles/canonical";
 import { effectiveFor } from "./service";
@@ -8,9 +8,12 @@ export async function adoptionOf(release: ReleaseRow) {
   const all = (await listControllersOfModel({ doorModelId: release.doorModelId })).filter((c) => targetCovers(release, c));
   const staged = all.filter((c) => inStage(c.serial, release.percent));
   let running = 0;
+  const hashes = new Set<string>();
   for (const c of staged) {
-    const eff = await effectiveFor(release, c);
-    if (c.runningHash === contentHash(eff.values)) running++;
+    const hash = contentHash((await effectiveFor(release, c)).values);
+    hashes.add(hash);
+    if (c.runningHash === hash) running++;
   }
-  return { target: all.length, staged: staged.length, running };
+  const history = await adoptionByDay({ controllerIds: staged.map((c) => c.id), hashes: [...hashes], since: release.createdAt });
+  return { target: all.length, staged: staged.length, running, history };
 }

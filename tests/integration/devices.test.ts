@@ -152,3 +152,21 @@ describe("releases", () => {
     expect(res.status).toBe(404);
   });
 });
+
+describe("adoption", () => {
+  it("counts controllers running a release, now and per day", async () => {
+    const { adoptionOf } = await import("@/lib/releases/adoption");
+    const { getRelease } = await import("@/db/queries/releases");
+    const admin = await signedInUser("admin");
+    const { doorModelId, revisionId } = await approvedBase();
+    const a = await registerController(doorModelId);
+    const b = await registerController(doorModelId);
+    const { releaseId } = await (await release(admin, { baseRevisionId: revisionId, target: { kind: "door_model" }, percent: 100 })).json();
+    const served = await (await config(a.serial, a.token)).json();
+    expect((await checkIn(a.serial, a.token, goodCheckIn(served.contentHash))).status).toBe(201);
+    expect((await checkIn(b.serial, b.token, goodCheckIn(null))).status).toBe(201);
+    const adoption = await adoptionOf((await getRelease({ releaseId }))!);
+    expect(adoption).toMatchObject({ target: 2, staged: 2, running: 1 });
+    expect(adoption.history).toEqual([{ day: new Date().toISOString().slice(0, 10), controllers: 1 }]);
+  });
+});

@@ -43,6 +43,11 @@ export default async function ReleasesPage() {
                     <>
                       {a.running} of {a.staged} running
                       <span className="block text-xs text-loam-600 dark:text-loam-400">{a.target} in target</span>
+                      {a.history.length > 0 && (
+                        <span className="block text-xs text-loam-600 dark:text-loam-400" title="Controllers reporting this release's configuration, per day (UTC)">
+                          {a.history.map((h) => `${h.day.slice(5)}: ${h.controllers}`).join(" · ")}
+                        </span>
+                      )}
                     </>
                   ) : (
                     "—"
