@@ -18,6 +18,11 @@ const answerSchema = z.object({
       lastSeenAt: z.string().nullable(),
       siteName: z.string(),
       doorModelName: z.string(),
+      assignedHash: z.string().nullable(),
+      drift: z.boolean(),
+      doorCycles: z.number().nullable(),
+      timeFixAgeS: z.number().nullable(),
+      stallEvents: z.number().nullable(),
     }),
   ),
 });
@@ -37,7 +42,28 @@ const COLUMNS: DataGridColumn<Row>[] = [
   { id: "site", header: "Site", accessor: (c) => c.siteName, filterable: true },
   { id: "model", header: "Door model", accessor: (c) => c.doorModelName, filterable: true },
   { id: "firmware", header: "Firmware", accessor: (c) => c.firmwareVersion, filterable: true, cell: (c) => <>{c.firmwareVersion} <Badge>set {c.parameterSetVersion}</Badge></> },
-  { id: "running", header: "Running", accessor: (c) => c.runningHash, className: "font-mono text-xs", cell: (c) => (c.runningHash ? c.runningHash.slice(0, 10) : "—") },
+  {
+    id: "running",
+    header: "Assigned / running",
+    accessor: (c) => (c.drift ? 0 : 1),
+    filterable: true,
+    filterText: (c) => (c.drift ? "drift" : c.assignedHash ? "in step" : "unassigned"),
+    className: "font-mono text-xs",
+    cell: (c) => (
+      <>
+        {c.assignedHash ? c.assignedHash.slice(0, 8) : "—"} / {c.runningHash ? c.runningHash.slice(0, 8) : "—"}{" "}
+        {c.drift ? <Badge tone="warn">drift</Badge> : c.assignedHash ? <Badge tone="good">in step</Badge> : null}
+      </>
+    ),
+  },
+  { id: "cycles", header: "Cycles", accessor: (c) => c.doorCycles, className: "tabular-nums", cell: (c) => c.doorCycles ?? "—" },
+  {
+    id: "fix",
+    header: "Time fix",
+    accessor: (c) => c.timeFixAgeS,
+    className: "tabular-nums",
+    cell: (c) => (c.timeFixAgeS === null ? "—" : c.timeFixAgeS > 86400 ? <Badge tone="warn">{Math.round(c.timeFixAgeS / 3600)} h old</Badge> : `${Math.round(c.timeFixAgeS / 60)} min`),
+  },
   {
     id: "seen",
     header: "Last seen",

@@ -170,3 +170,19 @@ describe("adoption", () => {
     expect(adoption.history).toEqual([{ day: new Date().toISOString().slice(0, 10), controllers: 1 }]);
   });
 });
+
+describe("fleet status", () => {
+  it("shows drift until a controller reports the assigned configuration, with its latest counters", async () => {
+    const { GET: listRoute } = await import("@/app/api/v1/controllers/route");
+    const admin = await signedInUser("admin");
+    const { doorModelId, revisionId } = await approvedBase();
+    const c = await registerController(doorModelId);
+    await release(admin, { baseRevisionId: revisionId, target: { kind: "door_model" }, percent: 100 });
+    const row = async () => ((await (await listRoute(jsonRequest("/api/v1/controllers", admin.cookie, "GET"), {})).json()).controllers as { serial: string; drift: boolean; doorCycles: number | null }[]).find((x) => x.serial === c.serial)!;
+    await checkIn(c.serial, c.token, goodCheckIn("b".repeat(64)));
+    expect(await row()).toMatchObject({ drift: true, doorCycles: 12 });
+    const served = await (await config(c.serial, c.token)).json();
+    await checkIn(c.serial, c.token, { ...goodCheckIn(served.contentHash), counters: { ...goodCheckIn(null).counters, doorCycles: 14 } });
+    expect(await row()).toMatchObject({ drift: false, doorCycles: 14 });
+  });
+});

@@ -1,13 +1,14 @@
-import { createController, listControllers } from "@/db/queries/controllers";
+import { createController } from "@/db/queries/controllers";
+import { fleetStatus } from "@/lib/releases/fleet-status";
 import { authorize } from "@/lib/auth/guard";
 import { handle, readJson } from "@/lib/http/route";
 import { controllerSchema } from "@/lib/releases/inputs";
 
 
-/** Every controller (signed-in readers). */
+/** Every controller with assigned vs running hash (drift) and its latest counters (signed-in readers). */
 export const GET = handle(async (request) => {
   await authorize(request.headers, "controllers:read");
-  return Response.json({ controllers: await listControllers() }, { headers: { "cache-control": "no-store" } });
+  return Response.json({ controllers: await fleetStatus() }, { headers: { "cache-control": "no-store" } });
 });
 
 /** Registers a controller; the answer carries its token, shown this once. */
