@@ -128,3 +128,19 @@ export async function recordCheckIn({ controllerId, input }: { controllerId: num
 export async function listCheckIns({ controllerId, limit = 200 }: { controllerId: number; limit?: number }) {
   return db.select().from(checkIns).where(eq(checkIns.controllerId, controllerId)).orderBy(desc(checkIns.id)).limit(limit);
 }
+
+/** Changes where a controller is or what it is; its next poll gets the configuration that follows from it. */
+export async function updateController({ actorId, controllerId, serial, change }: { actorId: string; controllerId: number; serial: string; change: { siteId?: number; doorModelId?: number; firmwareVersion?: string; parameterSetVersion?: 1 | 2 } }) {
+  await db.transaction(async (tx) => {
+    if (change.siteId) {
+      const [s] = await tx.select({ id: sites.id }).from(sites).where(eq(sites.id, change.siteId));
+      if (!s) throw new AppError("invalid_request", "No such site.", { issues: [{ path: "/siteId", message: "No such site" }] });
+    }
+    if (change.doorModelId) {
+      const [m] = await tx.select({ id: doorModels.id }).from(doorModels).where(eq(doorModels.id, change.doorModelId));
+      if (!m) throw new AppError("invalid_request", "No such door model.", { issues: [{ path: "/doorModelId", message: "No such door model" }] });
+    }
+    await tx.update(controllers).set(change).where(eq(controllers.id, controllerId));
+    await recordAudit({ actorId, action: "controller.updated", subjectType: "controller", subjectId: serial, detail: change }, tx);
+  });
+}

@@ -194,6 +194,18 @@ export const openApiDocument: OpenApiDocument = {
         responses: { "201": ok("The overlay profile and its new draft revision.", { type: "object", properties: { profileId: id, revisionId: id }, required: ["profileId", "revisionId"] }), ...errors("401", "403", "404", "409", "503") },
       },
     },
+    "/api/v1/controllers/{serial}": {
+      patch: {
+        operationId: "updateController",
+        summary: "Move a controller to another site or door model, or record new firmware",
+        description: "Needs controllers:manage (technicians and admins). Body: any of siteId, doorModelId, firmwareVersion, parameterSetVersion; other fields are refused.",
+        tags: ["fleet"],
+        security: SESSION,
+        parameters: [ref("parameters", "serial")],
+        requestBody: { required: true, content: { "application/json": { schema: { type: "object", additionalProperties: false, minProperties: 1, properties: { siteId: { type: "integer", minimum: 1 }, doorModelId: { type: "integer", minimum: 1 }, firmwareVersion: { type: "string", pattern: "^\\d+\\.\\d+\\.\\d+$" }, parameterSetVersion: { enum: [1, 2] } } } } } },
+        responses: { "200": ok("The controller as it is now.", { type: "object" }), ...errors("400", "401", "403", "404", "503") },
+      },
+    },
     "/api/v1/controllers/{serial}/token": {
       post: {
         operationId: "rotateToken",

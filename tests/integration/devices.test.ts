@@ -186,3 +186,21 @@ describe("fleet status", () => {
     expect(await row()).toMatchObject({ drift: false, doorCycles: 14 });
   });
 });
+
+describe("changing a controller", () => {
+  it("lets a technician move a controller to another site, names wrong fields, and refuses viewers", async () => {
+    const { PATCH: patchController } = await import("@/app/api/v1/controllers/[serial]/route");
+    const tech = await signedInUser("technician");
+    const viewer = await signedInUser("viewer");
+    const { doorModelId } = await approvedBase();
+    const c = await registerController(doorModelId);
+    const other = await siteId("prairie-gate");
+    const moved = await patchController(jsonRequest(`/api/v1/controllers/${c.serial}`, tech.cookie, "PATCH", { siteId: other, firmwareVersion: "1.5.0" }), params("serial", c.serial));
+    expect(moved.status).toBe(200);
+    expect((await moved.json()).controller).toMatchObject({ siteId: other, firmwareVersion: "1.5.0" });
+    const bad = await patchController(jsonRequest(`/api/v1/controllers/${c.serial}`, tech.cookie, "PATCH", { firmwareVersion: "one" }), params("serial", c.serial));
+    expect((await bad.json()).issues[0].path).toBe("/firmwareVersion");
+    expect((await patchController(jsonRequest(`/api/v1/controllers/${c.serial}`, viewer.cookie, "PATCH", { siteId: other }), params("serial", c.serial))).status).toBe(403);
+    expect((await patchController(jsonRequest("/api/v1/controllers/NOPE-9", tech.cookie, "PATCH", { siteId: other }), params("serial", "NOPE-9"))).status).toBe(404);
+  });
+});
