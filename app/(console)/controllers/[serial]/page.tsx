@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CalibrationUpload } from "@/components/fleet/calibration-upload";
+import { EditControllerForm } from "@/components/fleet/edit-controller-form";
+import { listSites } from "@/db/queries/fleet";
 import { TokenActions } from "@/components/fleet/token-actions";
 import { TrendPlot } from "@/components/fleet/trend-plot";
 import { EffectiveTable } from "@/components/profiles/effective-table";
@@ -83,6 +85,12 @@ export default async function ControllerPage({ params }: { params: Promise<{ ser
             </div>
           )}
         </Panel>
+        {hasPermission(user.role, "controllers:manage") && (
+          <Panel>
+            <h2 className="mb-2 text-lg font-semibold">Place and firmware</h2>
+            <EditControllerForm serial={controller.serial} siteId={controller.siteId} firmwareVersion={controller.firmwareVersion} sites={(await listSites()).map((s) => ({ value: String(s.id), label: s.name }))} />
+          </Panel>
+        )}
         {hasPermission(user.role, "tokens:manage") && (
           <Panel>
             <h2 className="mb-2 text-lg font-semibold">Device token</h2>
