@@ -7,7 +7,7 @@ import { formatEngineering as eng, formatNumber as f } from "@/lib/drive/eng-not
 import { debounceInputSchema, type DebounceInput } from "@/lib/drive/inputs";
 import { DebouncePlot } from "./drive-debounce-plot";
 import { DebounceSchematic } from "./drive-debounce-schematic";
-import { useToolForm } from "./drive-form";
+import { ToolLayout, useToolForm } from "./drive-form";
 import { FieldGroup, FixFields, Formulas, KeyFigure, ResultList, WarningList } from "./drive-parts";
 
 const INITIAL = {
@@ -30,9 +30,9 @@ export function DebounceTool({ initial = {} }: { initial?: Record<string, string
   const r = data ? computeDebounce(data) : null;
   const text = { autoComplete: "off", spellCheck: false };
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
-      <Panel className="self-start">
-        <form className="space-y-6" onSubmit={(e) => e.preventDefault()} noValidate>
+    <ToolLayout
+      form={
+        <>
           <FieldGroup legend="Circuit">
             <TextField label="R1, pull-up (Ω)" hint="Engineering notation: 10k, 4k7, 1M" {...text} {...field("r1Ohm")} />
             <TextField label="R2, to the capacitor (Ω)" {...text} {...field("r2Ohm")} />
@@ -48,9 +48,9 @@ export function DebounceTool({ initial = {} }: { initial?: Record<string, string
             <TextField label="Software sample period (ms)" inputMode="decimal" {...text} {...field("samplePeriodMs")} />
             <TextField label="Stable samples to accept" inputMode="numeric" {...text} {...field("stableSamples")} />
           </FieldGroup>
-        </form>
-      </Panel>
-      <div className="space-y-6">
+        </>
+      }
+    >
         <Panel>
           <h2 className="mb-3 text-lg font-semibold">Circuit</h2>
           <DebounceSchematic r1={label(data?.r1Ohm, values.r1Ohm, "Ω")} r2={label(data?.r2Ohm, values.r2Ohm, "Ω")} c={label(data?.cFarad, values.cFarad, "F")} />
@@ -70,8 +70,7 @@ export function DebounceTool({ initial = {} }: { initial?: Record<string, string
             capacitor had settled before the edge.
           </p>
         </Panel>
-      </div>
-    </div>
+    </ToolLayout>
   );
 }
 

@@ -5,7 +5,7 @@ import { Panel } from "@/components/ui/surface";
 import { formatNumber as f } from "@/lib/drive/eng-notation";
 import { stallInputSchema } from "@/lib/drive/inputs";
 import { computeStall, type Reach } from "@/lib/drive/stall";
-import { useToolForm } from "./drive-form";
+import { NUMERIC_INPUT, ToolLayout, useToolForm } from "./drive-form";
 import { FieldGroup, FixFields, Formulas, KeyFigure, ResultList, TrappingCaution, WarningList } from "./drive-parts";
 import { StallTimeline } from "./drive-stall-timeline";
 
@@ -17,11 +17,11 @@ const distance = (d: Reach) => `${f(d.counts, 3)} counts${d.mm === null ? "" : `
 export function StallTool({ initial = {} }: { initial?: Record<string, string> }) {
   const { data, field } = useToolForm(stallInputSchema, { ...INITIAL, ...initial });
   const r = data ? computeStall(data) : null;
-  const num = { inputMode: "decimal" as const, autoComplete: "off" };
+  const num = NUMERIC_INPUT;
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
-      <Panel className="self-start">
-        <form className="space-y-6" onSubmit={(e) => e.preventDefault()} noValidate>
+    <ToolLayout
+      form={
+        <>
           <FieldGroup legend="Check">
             <TextField label="Nominal velocity (counts/s)" hint="Count rate in normal running; see the drive-train tool" {...num} {...field("nominalCps")} />
             <TextField label="Stall fraction" hint="Stall below this share of nominal, between 0 and 1" {...num} {...field("fraction")} />
@@ -32,9 +32,9 @@ export function StallTool({ initial = {} }: { initial?: Record<string, string> }
             <TextField label="Ramp time to nominal (ms)" hint="Empty: 250 ms assumed; measure on a cold day" {...num} {...field("rampMs")} />
             <TextField label="Evaluation latency (ms)" hint="Evaluate, cut the drive and coast to rest" {...num} {...field("latencyMs")} />
           </FieldGroup>
-        </form>
-      </Panel>
-      <div className="space-y-6">
+        </>
+      }
+    >
         {r && data ? (
           <>
             <Panel>
@@ -93,7 +93,6 @@ export function StallTool({ initial = {} }: { initial?: Record<string, string> }
             and only trip on the next.
           </p>
         </Panel>
-      </div>
-    </div>
+    </ToolLayout>
   );
 }

@@ -5,7 +5,7 @@ import { DataTable, Panel, Td } from "@/components/ui/surface";
 import { formatNumber as f } from "@/lib/drive/eng-notation";
 import { travelInputSchema } from "@/lib/drive/inputs";
 import { computeTravel, type SpeedCase, type TravelResult } from "@/lib/drive/travel";
-import { useToolForm } from "./drive-form";
+import { NUMERIC_INPUT, ToolLayout, useToolForm } from "./drive-form";
 import { FieldGroup, FixFields, Formulas, KeyFigure, ResultList, TrappingCaution, WarningList } from "./drive-parts";
 
 const INITIAL = {
@@ -33,11 +33,11 @@ const DECODING_OPTIONS = [
 export function TravelTool({ initial = {} }: { initial?: Record<string, string> }) {
   const { data, field } = useToolForm(travelInputSchema, { ...INITIAL, ...initial });
   const result = data ? computeTravel(data) : null;
-  const num = { inputMode: "decimal" as const, autoComplete: "off" };
+  const num = NUMERIC_INPUT;
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
-      <Panel className="self-start">
-        <form className="space-y-6" onSubmit={(e) => e.preventDefault()} noValidate>
+    <ToolLayout
+      form={
+        <>
           <FieldGroup legend="Spool and cord">
             <TextField label="Door travel (mm)" hint="Open end stop to closed position" {...num} {...field("travelMm")} />
             <TextField label="Spool core diameter (mm)" {...num} {...field("spoolMm")} />
@@ -56,10 +56,11 @@ export function TravelTool({ initial = {} }: { initial?: Record<string, string> 
             <TextField label="Measured count rate (counts/s)" hint="From a controller log, to get the real motor speed" {...num} {...field("measuredCps")} />
             <TextField label="Count to convert" hint="Counts from the open end stop" {...num} {...field("counts")} />
           </FieldGroup>
-        </form>
-      </Panel>
-      <div className="space-y-6">{result ? <TravelResults r={result} /> : <FixFields />}</div>
-    </div>
+        </>
+      }
+    >
+{result ? <TravelResults r={result} /> : <FixFields />}
+    </ToolLayout>
   );
 }
 
