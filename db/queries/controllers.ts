@@ -1,14 +1,13 @@
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/db/client";
 import { checkIns, controllers, controllerTokens, doorModels, sites } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
+import { sha256Hex } from "@/lib/profiles/canonical";
 import { recordAudit } from "./audit";
 
 /** SHA-256 hex of a device token; only this is stored. */
-export function hashToken(token: string): string {
-  return createHash("sha256").update(token, "utf8").digest("hex");
-}
+export const hashToken = (token: string): string => sha256Hex(token);
 
 function newToken(): string {
   return `rlc_${randomBytes(32).toString("base64url")}`;
@@ -37,15 +36,21 @@ export async function createController(input: NewController, outer?: Tx): Promis
   });
 }
 
+/** Locks the controller and revokes its live tokens; returns its serial (404 when missing). */
+async function lockAndRevoke(tx: Tx, controllerId: number): Promise<string> {
+  const [c] = await tx.select({ serial: controllers.serial }).from(controllers).where(eq(controllers.id, controllerId)).for("update");
+  if (!c) throw new AppError("not_found", "No such controller.");
+  await tx.update(controllerTokens).set({ revokedAt: new Date() }).where(and(eq(controllerTokens.controllerId, controllerId), isNull(controllerTokens.revokedAt)));
+  return c.serial;
+}
+
 /** Revokes every live token of a controller and issues a new one (shown once). */
 export async function rotateToken({ actorId, controllerId }: { actorId: string; controllerId: number }): Promise<{ token: string }> {
   return db.transaction(async (tx) => {
-    const [c] = await tx.select({ serial: controllers.serial }).from(controllers).where(eq(controllers.id, controllerId)).for("update");
-    if (!c) throw new AppError("not_found", "No such controller.");
-    await tx.update(controllerTokens).set({ revokedAt: new Date() }).where(and(eq(controllerTokens.controllerId, controllerId), isNull(controllerTokens.revokedAt)));
+    const serial = await lockAndRevoke(tx, controllerId);
     const token = newToken();
     await tx.insert(controllerTokens).values({ controllerId, tokenHash: hashToken(token), hint: token.slice(-4), createdBy: actorId });
-    await recordAudit({ actorId, action: "controller.token_rotated", subjectType: "controller", subjectId: c.serial }, tx);
+    await recordAudit({ actorId, action: "controller.token_rotated", subjectType: "controller", subjectId: serial }, tx);
     return { token };
   });
 }
@@ -53,10 +58,8 @@ export async function rotateToken({ actorId, controllerId }: { actorId: string; 
 /** Revokes every live token of a controller; its next request gets 401. */
 export async function revokeTokens({ actorId, controllerId }: { actorId: string; controllerId: number }) {
   await db.transaction(async (tx) => {
-    const [c] = await tx.select({ serial: controllers.serial }).from(controllers).where(eq(controllers.id, controllerId)).for("update");
-    if (!c) throw new AppError("not_found", "No such controller.");
-    await tx.update(controllerTokens).set({ revokedAt: new Date() }).where(and(eq(controllerTokens.controllerId, controllerId), isNull(controllerTokens.revokedAt)));
-    await recordAudit({ actorId, action: "controller.token_revoked", subjectType: "controller", subjectId: c.serial }, tx);
+    const serial = await lockAndRevoke(tx, controllerId);
+    await recordAudit({ actorId, action: "controller.token_revoked", subjectType: "controller", subjectId: serial }, tx);
   });
 }
 

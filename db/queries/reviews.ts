@@ -39,6 +39,8 @@ export async function submitRevision(input: { actorId: string; revisionId: numbe
     if (rev.state !== "draft" && rev.state !== "changes_requested") {
       throw new AppError("conflict", `This revision is ${rev.state.replace("_", " ")}; only drafts can be submitted.`);
     }
+    // A fresh review: decisions from an earlier round (changes asked for) no longer count.
+    await tx.delete(reviewDecisions).where(eq(reviewDecisions.revisionId, rev.id));
     for (const ack of input.acknowledgements) {
       await tx.insert(safetyAcknowledgements).values({ revisionId: rev.id, ruleId: ack.ruleId, reason: ack.reason, authorId: input.actorId }).onDuplicateKeyUpdate({ set: { reason: ack.reason, authorId: input.actorId } });
     }

@@ -6,6 +6,7 @@ import v1Schema from "@/schemas/door-params-v1.schema.json";
 import v2Schema from "@/schemas/door-params-v2.schema.json";
 import type { DoorParamsV1 } from "@/schemas/generated/door-params-v1";
 import type { DoorParamsV2 } from "@/schemas/generated/door-params-v2";
+import { resolveTimeZone } from "@/lib/sun/time-zone";
 import { describeError } from "./messages";
 
 export type { DoorParamsV1, DoorParamsV2 };
@@ -31,14 +32,7 @@ export function getSchema(version: ParamsVersion): SchemaEntry {
 
 /** True when the name is a time zone this runtime's Intl knows, in IANA Area/Location spelling. */
 export function isKnownTimeZone(name: string): boolean {
-  // Offsets such as "+01:00" are accepted by newer engines as zones, but firmware needs a rule set.
-  if (!/^[A-Za-z][A-Za-z0-9_+-]*(\/[A-Za-z0-9_+-]+)*$/.test(name)) return false;
-  try {
-    new Intl.DateTimeFormat("en-US", { timeZone: name });
-    return true;
-  } catch {
-    return false;
-  }
+  return resolveTimeZone(name) !== null;
 }
 
 /** A fresh ajv instance with our annotation keywords and formats, in strict mode. */

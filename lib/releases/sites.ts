@@ -18,16 +18,20 @@ export const siteSchema = z.object({
 
 /** Adds a site (technicians and admins). */
 export async function createSite({ actorId, input }: { actorId: string; input: z.infer<typeof siteSchema> }) {
-  const [dup] = await db.select({ id: sites.id }).from(sites).where(eq(sites.slug, input.slug));
-  if (dup) throw new AppError("conflict", `A site with the short name ${input.slug} exists.`, { issues: [{ path: "/slug", message: "Already in use" }] });
-  const [row] = await db.insert(sites).values(input).$returningId();
-  await recordAudit({ actorId, action: "site.created", subjectType: "site", subjectId: input.slug });
-  return { siteId: row!.id };
+  return db.transaction(async (tx) => {
+    const [dup] = await tx.select({ id: sites.id }).from(sites).where(eq(sites.slug, input.slug)).for("update");
+    if (dup) throw new AppError("conflict", `A site with the short name ${input.slug} exists.`, { issues: [{ path: "/slug", message: "Already in use" }] });
+    const [row] = await tx.insert(sites).values(input).$returningId();
+    await recordAudit({ actorId, action: "site.created", subjectType: "site", subjectId: input.slug }, tx);
+    return { siteId: row!.id };
+  });
 }
 
 /** Changes a site's details; the short name stays. */
 export async function updateSite({ actorId, siteId, input }: { actorId: string; siteId: number; input: Omit<z.infer<typeof siteSchema>, "slug"> }) {
-  const [res] = await db.update(sites).set(input).where(eq(sites.id, siteId));
-  if (!res.affectedRows) throw new AppError("not_found", "No such site.");
-  await recordAudit({ actorId, action: "site.updated", subjectType: "site", subjectId: String(siteId), detail: { latitude: input.latitude, longitude: input.longitude, timeZone: input.timeZone } });
+  await db.transaction(async (tx) => {
+    const [res] = await tx.update(sites).set(input).where(eq(sites.id, siteId));
+    if (!res.affectedRows) throw new AppError("not_found", "No such site.");
+    await recordAudit({ actorId, action: "site.updated", subjectType: "site", subjectId: String(siteId), detail: { latitude: input.latitude, longitude: input.longitude, timeZone: input.timeZone } }, tx);
+  });
 }

@@ -3,7 +3,9 @@
 import { z } from "zod";
 import { enqueueMail } from "@/db/queries/mail";
 import { getBaseContent, getDoorModelForSafety, getSiteForSafety } from "@/db/queries/profile-context";
-import { getProfile, getRevision, latestApprovedRevision, saveRevision, type ProfileSummary } from "@/db/queries/profiles";
+import { getControllerBySerial } from "@/db/queries/controllers";
+import { getProfile, getRevision, getRevisions, latestApprovedRevision, saveRevision, type ProfileSummary } from "@/db/queries/profiles";
+import { approvedOverlaysOf } from "@/db/queries/releases";
 import { decideRevision, submitRevision, reviewerAddresses } from "@/db/queries/reviews";
 import { findUserById } from "@/db/queries/users";
 import type { SessionUser } from "@/lib/auth/guard";
@@ -28,8 +30,16 @@ export type Evaluation = {
 /** What the editor needs besides the content: the values beneath an overlay and the safety context. */
 export async function loadEditingContext(profile: ProfileSummary) {
   const doorModel = profile.doorModelId ? await getDoorModelForSafety({ doorModelId: profile.doorModelId }) : null;
-  const site = profile.siteId ? await getSiteForSafety({ siteId: profile.siteId }) : null;
-  const base = profile.layer !== "base" && profile.doorModelId ? await getBaseContent({ doorModelId: profile.doorModelId }) : null;
+  // A controller overlay sits at its controller's site, on top of that site's approved overlay.
+  const controller = profile.layer === "controller" && profile.controllerSerial ? await getControllerBySerial({ serial: profile.controllerSerial }) : null;
+  const siteId = profile.siteId ?? controller?.siteId ?? null;
+  const site = siteId ? await getSiteForSafety({ siteId }) : null;
+  let base = profile.layer !== "base" && profile.doorModelId ? await getBaseContent({ doorModelId: profile.doorModelId }) : null;
+  if (base && controller && profile.doorModelId) {
+    const siteOverlayId = (await approvedOverlaysOf({ doorModelId: profile.doorModelId }))[String(controller.siteId)];
+    const [siteOverlay] = siteOverlayId ? await getRevisions({ revisionIds: [siteOverlayId] }) : [];
+    if (siteOverlay) base = { ...base, content: mergeLayers([{ layer: "base", values: base.content }, { layer: "site", values: siteOverlay.content }]).values };
+  }
   return { doorModel, site, base };
 }
 

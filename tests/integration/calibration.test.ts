@@ -54,3 +54,17 @@ describe("calibration runs", () => {
     expect((await uploadRoute(jsonRequest("/api/v1/controllers/NOPE-1/calibrations", tech.cookie, "POST", huge), params("serial", "NOPE-1"))).status).toBe(400);
   });
 });
+
+describe("controller overlays", () => {
+  it("are checked at their controller's site, so no site warning needs acknowledging", async () => {
+    const { GET: revisionRoute } = await import("@/app/api/v1/revisions/[revisionId]/route");
+    const tech = await signedInUser("technician");
+    const engineer = await signedInUser("engineer");
+    const { doorModelId } = await approvedBase();
+    const c = await registerController(doorModelId);
+    const up = await (await uploadRoute(jsonRequest(`/api/v1/controllers/${c.serial}/calibrations`, tech.cookie, "POST", { fileName: "run.csv", csv: fixture("example-run.csv") }), params("serial", c.serial))).json();
+    const { revisionId } = await (await draftRoute(jsonRequest(`/api/v1/calibrations/${up.runId}/draft`, tech.cookie, "POST"), params("runId", up.runId))).json();
+    const body = await (await revisionRoute(jsonRequest(`/api/v1/revisions/${revisionId}`, engineer.cookie, "GET"), params("revisionId", revisionId))).json();
+    expect(body.checks.findings.map((f: { ruleId: string }) => f.ruleId)).not.toContain("RL-NO-SITE");
+  });
+});
