@@ -28,7 +28,7 @@ export default async function OverviewPage() {
       <div className="grid gap-4 sm:grid-cols-3">
         <Stat label="Sites" value={counts.sites} href="/sites" />
         <Stat label="Door models" value={counts.doorModels} href="/profiles" />
-        <Stat label="People with access" value={counts.people} href={user.role === "admin" ? "/admin/users" : undefined} />
+        <Stat label="People with access" value={counts.people} href={hasPermission(user.role, "users:manage") ? "/admin/users" : undefined} />
       </div>
       {(queue.length > 0 || mine.length > 0) && (
         <Panel className="mt-6">

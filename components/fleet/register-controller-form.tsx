@@ -18,7 +18,9 @@ export function RegisterControllerForm({ doorModels, sites }: { doorModels: Opti
 
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const form = new FormData(event.currentTarget);
+    // React clears currentTarget once the handler awaits; keep the element for the reset below.
+    const formEl = event.currentTarget;
+    const form = new FormData(formEl);
     const body = {
       serial: String(form.get("serial") ?? ""),
       doorModelId: Number(form.get("doorModelId")),
@@ -37,7 +39,7 @@ export function RegisterControllerForm({ doorModels, sites }: { doorModels: Opti
       return;
     }
     setIssued({ serial: body.serial.toUpperCase(), token: r.data.token });
-    event.currentTarget.reset();
+    formEl.reset();
     router.refresh();
   }
 

@@ -81,7 +81,7 @@ export default async function ControllerPage({ params }: { params: Promise<{ ser
           )}
           {hasPermission(user.role, "calibrations:upload") && (
             <div className="mt-3">
-              <CalibrationUpload serial={controller.serial} canDraft />
+              <CalibrationUpload serial={controller.serial} canDraft={hasPermission(user.role, "calibrations:upload")} />
             </div>
           )}
         </Panel>

@@ -20,7 +20,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const revisions = await getRevisions({ revisionIds: ids });
   const a = revisions.find((r) => r.id === ids[0]);
   const b = revisions.find((r) => r.id === ids[1]);
-  if (!profile || !a || !b) notFound();
+  if (!profile || !a || !b || a.profileId !== profileId || b.profileId !== profileId) notFound();
   return (
     <>
       <p className="mb-2 text-sm">

@@ -5,7 +5,7 @@ import { draftOverlayFromRun } from "@/lib/releases/calibration";
 
 type Ctx = { params: Promise<{ runId: string }> };
 
-/** Turns a run's suggestion into a draft controller overlay (engineers and technicians). */
+/** Turns a run's suggestion into a draft controller overlay (technicians and admins); an engineer then submits it. */
 export const POST = handle<Ctx>(async (request, ctx) => {
   const actor = await authorize(request.headers, "calibrations:upload");
   const runId = idParam((await ctx.params).runId, "calibration run");
