@@ -57,7 +57,11 @@ ensure_apt() {
   command -v "$cmd" >/dev/null 2>&1 && return 0
   log "installing Debian package $pkg"
   local sudo=""
-  [[ "$(id -u)" -eq 0 ]] || sudo="sudo"
-  $sudo apt-get update -qq
-  DEBIAN_FRONTEND=noninteractive $sudo apt-get install -y -qq "$pkg" >/dev/null
+  if [[ "$(id -u)" -ne 0 ]]; then
+    sudo -n true 2>/dev/null || die "installing $pkg needs root: run this as root or with passwordless sudo"
+    sudo="sudo -n"
+  fi
+  # A freshly booted machine may still hold the dpkg lock for its own updates: wait for it.
+  $sudo apt-get -o DPkg::Lock::Timeout=300 update -qq
+  DEBIAN_FRONTEND=noninteractive $sudo apt-get -o DPkg::Lock::Timeout=300 install -y -qq "$pkg" >/dev/null
 }

@@ -11,6 +11,7 @@ mkdir -p "$ARTIFACTS"
 
 ensure_node_modules
 ensure_apt chromium chromium
+ensure_apt curl curl
 ensure_secret
 bash scripts/db-start.sh
 
