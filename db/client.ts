@@ -38,6 +38,11 @@ export const db: Db = new Proxy({} as Db, {
   },
 });
 
+/** The real Drizzle instance behind `db`, for things made once per pool (prepared queries). */
+export function currentDb(): Db {
+  return handle().db;
+}
+
 /** Closes the pool (scripts and tests). */
 export async function closeDb(): Promise<void> {
   const h = globalForDb.roostlineDb;

@@ -63,19 +63,6 @@ export async function revokeTokens({ actorId, controllerId }: { actorId: string;
   });
 }
 
-export type DeviceController = { id: number; serial: string; doorModelId: number; siteId: number; parameterSetVersion: number; tokenHash: string };
-
-/** The controller owning a live token, by the token's hash (one indexed lookup). */
-export async function findControllerByTokenHash({ tokenHash }: { tokenHash: string }): Promise<DeviceController | null> {
-  const [row] = await db
-    .select({ id: controllers.id, serial: controllers.serial, doorModelId: controllers.doorModelId, siteId: controllers.siteId, parameterSetVersion: controllers.parameterSetVersion, tokenHash: controllerTokens.tokenHash })
-    .from(controllerTokens)
-    .innerJoin(controllers, eq(controllers.id, controllerTokens.controllerId))
-    .where(and(eq(controllerTokens.tokenHash, tokenHash), isNull(controllerTokens.revokedAt)))
-    .limit(1);
-  return row ?? null;
-}
-
 /** Every controller with its site and door model names. */
 export async function listControllers() {
   return db

@@ -106,3 +106,13 @@ export const calibrationRuns = mysqlTable("calibration_runs", {
   uploadedBy: varchar("uploaded_by", { length: 36 }).references(() => users.id, { onDelete: "set null" }),
   createdAt: createdAt(),
 });
+
+/**
+ * One row whose number goes up in the same transaction as every change to releases. Each device
+ * poll reads it with the token lookup, so every app instance sees a release at once and may keep
+ * what it computed for a controller until the number moves.
+ */
+export const configGeneration = mysqlTable("config_generation", {
+  id: tinyint("id", { unsigned: true }).primaryKey(),
+  generation: bigint("generation", { mode: "number", unsigned: true }).notNull(),
+});

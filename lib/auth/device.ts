@@ -1,5 +1,6 @@
 import { timingSafeEqual } from "node:crypto";
-import { findControllerByTokenHash, hashToken, type DeviceController } from "@/db/queries/controllers";
+import { hashToken } from "@/db/queries/controllers";
+import { type DeviceController, findControllerByTokenHash } from "@/db/queries/device-lookup";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/http/errors";
 

@@ -9,8 +9,12 @@ export async function adoptionOf(release: ReleaseRow) {
   const staged = all.filter((c) => inStage(c.serial, release.percent));
   let running = 0;
   const hashes = new Set<string>();
+  const byKey = new Map<string, string>();
   for (const c of staged) {
-    const hash = contentHash((await effectiveFor(release, c)).values);
+    // Controllers at one site without an overlay of their own share one configuration.
+    const key = `${c.siteId}:${release.overlayRevisionIds[`serial:${c.serial}`] ? c.serial : ""}`;
+    const hash = byKey.get(key) ?? contentHash((await effectiveFor(release, c)).values);
+    byKey.set(key, hash);
     hashes.add(hash);
     if (c.runningHash === hash) running++;
   }

@@ -9,6 +9,7 @@ import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/http/errors";
 import { inStage } from "@/lib/fleet/stage";
 import { signPayload } from "@/lib/fleet/signing";
+import { BoundedMap, GenerationCache } from "./config-cache";
 import { canonicalJson, contentHash } from "@/lib/profiles/canonical";
 import { diffParams, type DiffRow } from "@/lib/profiles/diff";
 import { mergeLayers, type LayerName } from "@/lib/profiles/merge";
@@ -19,15 +20,35 @@ type ControllerRef = { id: number; serial: string; doorModelId: number; siteId: 
 
 export type Effective = { values: Record<string, unknown>; provenance: Record<string, LayerName>; version: ParamsVersion; baseRevisionId: number; overlayRevisionId: number | null };
 
+type RevisionContent = { id: number; content: Record<string, unknown>; schemaVersion: number };
+
+// Revisions never change once written, so their content may be kept for as long as memory allows.
+const revisionContents = new BoundedMap<number, RevisionContent>(2_000);
+
+async function revisionsById(ids: number[]): Promise<Map<number, RevisionContent>> {
+  const out = new Map<number, RevisionContent>();
+  const missing = ids.filter((id) => {
+    const hit = revisionContents.get(id);
+    if (hit) out.set(id, hit);
+    return !hit;
+  });
+  for (const r of await getRevisions({ revisionIds: missing })) {
+    const kept = { id: r.id, content: r.content as Record<string, unknown>, schemaVersion: r.schemaVersion };
+    revisionContents.set(r.id, kept);
+    out.set(r.id, kept);
+  }
+  return out;
+}
+
 /** The configuration a release gives one controller: base ← its site's pinned overlay ← its own pinned overlay. */
 export async function effectiveFor(release: ReleaseRow, controller: ControllerRef): Promise<Effective> {
   const overlayId = release.overlayRevisionIds[String(controller.siteId)] ?? null;
   const ownId = release.overlayRevisionIds[`serial:${controller.serial}`] ?? null;
-  const ids = [release.baseRevisionId, overlayId, ownId].filter((x): x is number => x !== null);
-  const revisions = await getRevisions({ revisionIds: ids });
-  const base = revisions.find((r) => r.id === release.baseRevisionId)!;
-  const overlay = overlayId ? revisions.find((r) => r.id === overlayId) : undefined;
-  const own = ownId ? revisions.find((r) => r.id === ownId) : undefined;
+  const revisions = await revisionsById([release.baseRevisionId, overlayId, ownId].filter((x): x is number => x !== null));
+  const base = revisions.get(release.baseRevisionId);
+  if (!base) throw new Error(`release ${release.id} names revision ${release.baseRevisionId}, which does not exist`);
+  const overlay = overlayId ? revisions.get(overlayId) : undefined;
+  const own = ownId ? revisions.get(ownId) : undefined;
   const layers = [
     { layer: "base" as const, values: base.content },
     ...(overlay ? [{ layer: "site" as const, values: overlay.content }] : []),
@@ -37,10 +58,13 @@ export async function effectiveFor(release: ReleaseRow, controller: ControllerRe
   return { values: merged.values, provenance: merged.provenance, version: base.schemaVersion as ParamsVersion, baseRevisionId: base.id, overlayRevisionId: overlay?.id ?? null };
 }
 
+function pickAssignment(live: ReleaseRow[], controller: ControllerRef): ReleaseRow | null {
+  return live.find((r) => targetCovers(r, controller) && inStage(controller.serial, r.percent)) ?? null;
+}
+
 /** The newest live release that covers the controller and whose stage includes it, or null. */
 export async function assignmentFor(controller: ControllerRef): Promise<ReleaseRow | null> {
-  const live = await listLiveReleases({ doorModelId: controller.doorModelId });
-  return live.find((r) => targetCovers(r, controller) && inStage(controller.serial, r.percent)) ?? null;
+  return pickAssignment(await listLiveReleases({ doorModelId: controller.doorModelId }), controller);
 }
 
 export type DeviceConfig = { body: string; etag: string; contentHash: string };
@@ -51,10 +75,8 @@ function signingKey(): string {
   return key;
 }
 
-/** The signed configuration document for a controller, or null when nothing is released to it. */
-export async function deviceConfigFor(controller: ControllerRef): Promise<DeviceConfig | null> {
-  const release = await assignmentFor(controller);
-  if (!release) return null;
+/** The signed configuration document a release gives a controller. */
+async function buildDeviceConfig(release: ReleaseRow, controller: ControllerRef): Promise<DeviceConfig> {
   const eff = await effectiveFor(release, controller);
   const hash = contentHash(eff.values);
   const payload = {
@@ -72,6 +94,24 @@ export async function deviceConfigFor(controller: ControllerRef): Promise<Device
   const signature = signPayload(canonical, signingKey());
   const body = JSON.stringify({ ...payload, signature: { algorithm: "Ed25519", value: signature, signed: "canonical JSON of this object without `signature`" } });
   return { body, etag: `"${contentHash({ canonical, signature }).slice(0, 40)}"`, contentHash: hash };
+}
+
+// Enough for a large fleet per instance (≈ 2 KB each); beyond it the oldest are recomputed.
+const liveByModel = new GenerationCache<ReleaseRow[]>(1_000);
+const configByController = new GenerationCache<DeviceConfig | null>(50_000);
+
+/**
+ * The signed configuration for a polling controller, or null when nothing is released to it. Kept per
+ * process under the generation read with the token, so a steady-state poll makes no query of its own.
+ */
+export async function deviceConfigFor(controller: ControllerRef & { configGeneration: number }): Promise<DeviceConfig | null> {
+  const gen = controller.configGeneration;
+  const key = `${controller.id}:${controller.serial}:${controller.doorModelId}:${controller.siteId}:${controller.parameterSetVersion}`;
+  return configByController.get(gen, key, async () => {
+    const live = await liveByModel.get(gen, String(controller.doorModelId), () => listLiveReleases({ doorModelId: controller.doorModelId }));
+    const release = pickAssignment(live, controller);
+    return release ? buildDeviceConfig(release, controller) : null;
+  });
 }
 
 export const releaseSchema = z.object({
@@ -107,17 +147,26 @@ export async function previewRelease(input: z.infer<typeof releaseSchema>): Prom
   const doorModel = await getDoorModelForSafety({ doorModelId });
   const problems: ReleaseProblem[] = [];
   const siteCache = new Map<number, Awaited<ReturnType<typeof getSiteForSafety>>>();
+  // Controllers at one site without an overlay of their own, on one parameter set, get the same
+  // configuration: check it once for all of them.
+  const reasonsByKey = new Map<string, string[]>();
   for (const c of affected) {
-    const eff = await effectiveFor(draft, c);
-    const reasons: string[] = [];
-    if (c.parameterSetVersion !== eff.version) reasons.push(`runs parameter set ${c.parameterSetVersion}, the release is set ${eff.version}`);
-    const check = validateParams(eff.version, eff.values);
-    for (const i of check.issues) reasons.push(`${i.path || "document"}: ${i.message}`);
-    if (check.ok) {
-      if (!siteCache.has(c.siteId)) siteCache.set(c.siteId, await getSiteForSafety({ siteId: c.siteId }));
-      const site = siteCache.get(c.siteId);
-      const findings = checkSafety(eff.version, eff.values, { now: new Date(), ...(doorModel ? { doorModel } : {}), ...(site ? { site: { latitude: site.latitude, longitude: site.longitude, timeZone: site.timeZone } } : {}) });
-      for (const f of findings.filter((x) => x.severity === "error")) reasons.push(`${f.ruleId}: ${f.message}`);
+    const own = draft.overlayRevisionIds[`serial:${c.serial}`] ? c.serial : "";
+    const key = `${c.siteId}:${own}:${c.parameterSetVersion}`;
+    let reasons = reasonsByKey.get(key);
+    if (!reasons) {
+      reasons = [];
+      const eff = await effectiveFor(draft, c);
+      if (c.parameterSetVersion !== eff.version) reasons.push(`runs parameter set ${c.parameterSetVersion}, the release is set ${eff.version}`);
+      const check = validateParams(eff.version, eff.values);
+      for (const i of check.issues) reasons.push(`${i.path || "document"}: ${i.message}`);
+      if (check.ok) {
+        if (!siteCache.has(c.siteId)) siteCache.set(c.siteId, await getSiteForSafety({ siteId: c.siteId }));
+        const site = siteCache.get(c.siteId);
+        const findings = checkSafety(eff.version, eff.values, { now: new Date(), ...(doorModel ? { doorModel } : {}), ...(site ? { site: { latitude: site.latitude, longitude: site.longitude, timeZone: site.timeZone } } : {}) });
+        for (const f of findings.filter((x) => x.severity === "error")) reasons.push(`${f.ruleId}: ${f.message}`);
+      }
+      reasonsByKey.set(key, reasons);
     }
     if (reasons.length) problems.push({ serial: c.serial, reasons });
   }
