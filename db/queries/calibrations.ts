@@ -5,9 +5,11 @@ import { recordAudit } from "./audit";
 
 /** Stores an uploaded run with what was computed from it. */
 export async function insertCalibrationRun(input: { controllerId: number; serial: string; fileName: string; csv: string; analysis: Record<string, unknown>; uploadedBy: string }) {
-  const [row] = await db.insert(calibrationRuns).values({ controllerId: input.controllerId, fileName: input.fileName, csv: input.csv, analysis: input.analysis, uploadedBy: input.uploadedBy }).$returningId();
-  await recordAudit({ actorId: input.uploadedBy, action: "calibration.uploaded", subjectType: "controller", subjectId: input.serial, detail: { runId: row!.id, fileName: input.fileName } });
-  return { runId: row!.id };
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(calibrationRuns).values({ controllerId: input.controllerId, fileName: input.fileName, csv: input.csv, analysis: input.analysis, uploadedBy: input.uploadedBy }).$returningId();
+    await recordAudit({ actorId: input.uploadedBy, action: "calibration.uploaded", subjectType: "controller", subjectId: input.serial, detail: { runId: row!.id, fileName: input.fileName } }, tx);
+    return { runId: row!.id };
+  });
 }
 
 /** A controller's runs, newest first (without the CSV). */

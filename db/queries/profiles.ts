@@ -148,20 +148,30 @@ export type NewProfile = {
 /** Creates a profile and its first revision (a draft) in one transaction. */
 export async function createProfile(input: NewProfile): Promise<{ profileId: number; revisionId: number }> {
   return db.transaction(async (tx) => {
-    const [model] = await tx.select({ id: doorModels.id }).from(doorModels).where(eq(doorModels.id, input.doorModelId));
+    // Creators of one door model's profiles queue on its row; locking the (absent) profile rows
+    // instead would take gap locks that deadlock two concurrent creates.
+    const [model] = await tx.select({ id: doorModels.id }).from(doorModels).where(eq(doorModels.id, input.doorModelId)).for("update");
     if (!model) throw new AppError("invalid_request", "No such door model.", { issues: [{ path: "/doorModelId", message: "No such door model" }] });
     if (input.layer === "base") {
-      const [existing] = await tx.select({ id: profiles.id }).from(profiles).where(and(eq(profiles.layer, "base"), eq(profiles.doorModelId, input.doorModelId))).for("update");
+      const [existing] = await tx.select({ id: profiles.id }).from(profiles).where(and(eq(profiles.layer, "base"), eq(profiles.doorModelId, input.doorModelId)));
       if (existing) throw new AppError("conflict", "This door model already has a base profile; edit that one.", { issues: [{ path: "/doorModelId", message: "Already has a base profile" }] });
     }
     if (input.layer === "site") {
       if (!input.siteId) throw new AppError("invalid_request", "A site overlay needs a site.", { issues: [{ path: "/siteId", message: "Choose a site" }] });
+      const [site] = await tx.select({ id: sites.id }).from(sites).where(eq(sites.id, input.siteId));
+      if (!site) throw new AppError("invalid_request", "No such site.", { issues: [{ path: "/siteId", message: "No such site" }] });
       const [existing] = await tx
         .select({ id: profiles.id })
         .from(profiles)
-        .where(and(eq(profiles.layer, "site"), eq(profiles.doorModelId, input.doorModelId), eq(profiles.siteId, input.siteId)))
-        .for("update");
+        .where(and(eq(profiles.layer, "site"), eq(profiles.doorModelId, input.doorModelId), eq(profiles.siteId, input.siteId)));
       if (existing) throw new AppError("conflict", "This site already has an overlay for this door model.", { issues: [{ path: "/siteId", message: "Already has an overlay" }] });
+    }
+    if (input.layer === "controller" && input.controllerSerial) {
+      const [existing] = await tx
+        .select({ id: profiles.id })
+        .from(profiles)
+        .where(and(eq(profiles.layer, "controller"), eq(profiles.doorModelId, input.doorModelId), eq(profiles.controllerSerial, input.controllerSerial)));
+      if (existing) throw new AppError("conflict", "This controller already has an overlay; add a revision to it.", { issues: [{ path: "/controllerSerial", message: "Already has an overlay" }] });
     }
     const [p] = await tx
       .insert(profiles)

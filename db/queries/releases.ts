@@ -1,6 +1,6 @@
 import { and, desc, eq, gte, inArray, sql } from "drizzle-orm";
-import { db } from "@/db/client";
-import { checkIns, controllers, profileRevisions, profiles, releases } from "@/db/schema";
+import { db, type Tx } from "@/db/client";
+import { checkIns, configGeneration, controllers, doorModels, profileRevisions, profiles, releases } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { recordAudit } from "./audit";
 
@@ -49,6 +49,25 @@ export async function listControllersOfModel({ doorModelId }: { doorModelId: num
     .where(eq(controllers.doorModelId, doorModelId));
 }
 
+/** Moves the configuration generation on, inside the transaction that changes releases (see configGeneration). */
+export async function bumpConfigGeneration(tx: Tx) {
+  await tx
+    .insert(configGeneration)
+    .values({ id: 1, generation: 1 })
+    .onDuplicateKeyUpdate({ set: { generation: sql`${configGeneration.generation} + 1` } });
+}
+
+function sameTarget(r: ReleaseRow, t: ReleaseTarget): boolean {
+  if (r.targetKind !== t.kind) return false;
+  if (t.kind === "site") return r.targetSiteId === t.siteId;
+  if (t.kind === "controllers") return [...(r.targetSerials ?? [])].sort().join(",") === [...t.serials].sort().join(",");
+  return true;
+}
+
+/**
+ * Creates a release with its audit event in one transaction. The door model's row is locked, so two
+ * admins releasing the same revision to the same target at once get one release and one 409.
+ */
 export async function insertRelease(input: {
   actorId: string;
   baseRevisionId: number;
@@ -58,22 +77,34 @@ export async function insertRelease(input: {
   percent: number;
   note?: string | null;
 }) {
-  const [row] = await db
-    .insert(releases)
-    .values({
-      baseRevisionId: input.baseRevisionId,
-      doorModelId: input.doorModelId,
-      overlayRevisionIds: input.overlayRevisionIds,
-      targetKind: input.target.kind,
-      targetSiteId: input.target.kind === "site" ? input.target.siteId : null,
-      targetSerials: input.target.kind === "controllers" ? input.target.serials : null,
-      percent: input.percent,
-      note: input.note ?? null,
-      createdBy: input.actorId,
-    })
-    .$returningId();
-  await recordAudit({ actorId: input.actorId, action: "release.created", subjectType: "release", subjectId: String(row!.id), detail: { baseRevisionId: input.baseRevisionId, percent: input.percent, target: input.target.kind } });
-  return { releaseId: row!.id };
+  return db.transaction(async (tx) => {
+    await tx.select({ id: doorModels.id }).from(doorModels).where(eq(doorModels.id, input.doorModelId)).for("update");
+    const live = await tx
+      .select()
+      .from(releases)
+      .where(and(eq(releases.doorModelId, input.doorModelId), eq(releases.baseRevisionId, input.baseRevisionId), inArray(releases.state, ["active", "paused"])));
+    const twin = live.find((r) => sameTarget(r, input.target));
+    if (twin) {
+      throw new AppError("conflict", `Release ${twin.id} already puts this revision on this target (${twin.percent} %, ${twin.state}); widen or resume it instead.`);
+    }
+    const [row] = await tx
+      .insert(releases)
+      .values({
+        baseRevisionId: input.baseRevisionId,
+        doorModelId: input.doorModelId,
+        overlayRevisionIds: input.overlayRevisionIds,
+        targetKind: input.target.kind,
+        targetSiteId: input.target.kind === "site" ? input.target.siteId : null,
+        targetSerials: input.target.kind === "controllers" ? input.target.serials : null,
+        percent: input.percent,
+        note: input.note ?? null,
+        createdBy: input.actorId,
+      })
+      .$returningId();
+    await recordAudit({ actorId: input.actorId, action: "release.created", subjectType: "release", subjectId: String(row!.id), detail: { baseRevisionId: input.baseRevisionId, percent: input.percent, target: input.target.kind } }, tx);
+    await bumpConfigGeneration(tx);
+    return { releaseId: row!.id };
+  });
 }
 
 /** Changes a release's share or state in a transaction; the row is locked so two admins get one outcome each. */
@@ -83,9 +114,10 @@ export async function updateRelease({ actorId, releaseId, change }: { actorId: s
     if (!r) throw new AppError("not_found", "No such release.");
     if (r.state === "rolled_back") throw new AppError("conflict", "This release was rolled back; release the revision again instead.");
     if (change.percent !== undefined && change.percent < r.percent) {
-      throw new AppError("invalid_request", `A release only widens: it is at ${r.percent} %. Roll it back to take it away.`, { issues: [{ path: "/percent", message: `must be at least ${r.percent}` }] });
+      throw new AppError("conflict", `A release only widens: it is at ${r.percent} %. Roll it back to take it away.`, { issues: [{ path: "/percent", message: `must be at least ${r.percent}` }] });
     }
     await tx.update(releases).set(change).where(eq(releases.id, releaseId));
+    await bumpConfigGeneration(tx);
     await recordAudit({ actorId, action: change.state === "rolled_back" ? "release.rolled_back" : change.state ? `release.${change.state === "paused" ? "paused" : "resumed"}` : "release.widened", subjectType: "release", subjectId: String(releaseId), detail: { from: { percent: r.percent, state: r.state }, to: change } }, tx);
     return { ...r, ...change };
   });

@@ -105,9 +105,11 @@ export async function withdrawRevision({ actorId, revisionId }: { actorId: strin
 export async function addComment({ authorId, revisionId, path, body }: { authorId: string; revisionId: number; path: string; body: string }) {
   const [rev] = await db.select({ id: profileRevisions.id }).from(profileRevisions).where(eq(profileRevisions.id, revisionId));
   if (!rev) throw new AppError("not_found", "No such revision.");
-  const [row] = await db.insert(reviewComments).values({ authorId, revisionId, path, body }).$returningId();
-  await recordAudit({ actorId: authorId, action: "revision.commented", subjectType: "revision", subjectId: String(revisionId), detail: { path } });
-  return { commentId: row!.id };
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(reviewComments).values({ authorId, revisionId, path, body }).$returningId();
+    await recordAudit({ actorId: authorId, action: "revision.commented", subjectType: "revision", subjectId: String(revisionId), detail: { path } }, tx);
+    return { commentId: row!.id };
+  });
 }
 
 /** Comments on a revision, oldest first, with author names. */

@@ -58,6 +58,18 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   return false;
 }
 
+const CONTENTION_CODES = new Set(["ER_LOCK_DEADLOCK", "ER_LOCK_WAIT_TIMEOUT"]);
+
+/** Whether an error (or its cause) is the database giving up on a transaction that met another. */
+export function isContention(err: unknown): boolean {
+  for (let e: unknown = err, depth = 0; e && depth < 5; depth++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === "string" && CONTENTION_CODES.has(code)) return true;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
 /** Turns any thrown value into a known AppError, or undefined when it must be logged and masked. */
 export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
@@ -65,6 +77,10 @@ export function toAppError(err: unknown): AppError | undefined {
     return new AppError("unavailable", "The database is not reachable right now; try again shortly.", {
       retryAfterSeconds: 5,
     });
+  }
+  if (isContention(err)) {
+    // The transaction was rolled back whole; nothing was written.
+    return new AppError("conflict", "Someone else changed this at the same moment; nothing was saved. Try again.", { retryAfterSeconds: 1 });
   }
   return undefined;
 }
