@@ -20,9 +20,12 @@ const engineering = <T extends z.ZodType>(inner: T) => z.preprocess(fromText(par
 const always = { when: () => true };
 const isNum = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
 
-const positive = () => numberType().positive("must be greater than 0");
-const nonNegative = () => numberType().nonnegative("must be 0 or more");
-const wholePositive = () => numberType().int("must be a whole number").positive("must be greater than 0");
+// Bounds far outside any door, so that no input reaches the overflow or underflow of a double.
+const LARGEST = 1e9;
+const SMALLEST = 1e-9;
+const positive = () => numberType().positive("must be greater than 0").gte(SMALLEST, `must be at least ${SMALLEST}`).lte(LARGEST, `must be at most ${LARGEST}`);
+const nonNegative = () => numberType().nonnegative("must be 0 or more").lte(LARGEST, `must be at most ${LARGEST}`);
+const wholePositive = () => numberType().int("must be a whole number").positive("must be greater than 0").lte(LARGEST, `must be at most ${LARGEST}`);
 
 export const DECODINGS = [1, 2, 4] as const;
 

@@ -10,6 +10,8 @@ export const idle: ActionResult = { ok: true };
 
 /** Parses FormData with a zod schema into field errors keyed by field name. */
 export function parseForm<S extends z.ZodType>(schema: S, form: FormData): { data: z.infer<S> } | { result: ActionResult<never> } {
+  // An action can be posted by hand with any argument; only a form is a form.
+  if (!(form instanceof FormData)) return { result: { ok: false, code: "invalid_request", message: "Send the form's fields." } };
   const parsed = schema.safeParse(Object.fromEntries(form.entries()));
   if (parsed.success) return { data: parsed.data };
   const fieldErrors: Record<string, string> = {};

@@ -18,3 +18,15 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown, what =
   const summary = first ? `${first.path || "body"}: ${first.message}` : "invalid";
   throw new AppError("invalid_request", `The ${what} is not valid (${summary}).`, { issues });
 }
+
+/** Whether a parsed JSON value nests no deeper than `limit` objects and arrays (MariaDB's JSON type stops at 32). */
+export function withinJsonDepth(value: unknown, limit = 32): boolean {
+  const stack: [unknown, number][] = [[value, 0]];
+  while (stack.length) {
+    const [v, depth] = stack.pop()!;
+    if (v === null || typeof v !== "object") continue;
+    if (depth + 1 > limit) return false;
+    for (const child of Object.values(v)) stack.push([child, depth + 1]);
+  }
+  return true;
+}

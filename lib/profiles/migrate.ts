@@ -101,7 +101,7 @@ function migrateSchedule(schedule: JsonValue): JsonObject {
   if (!isPlainObject(schedule)) throw new MigrationError("the schedule must be an object", "/schedule");
   const out: JsonObject = {};
   for (const [key, value] of Object.entries(schedule)) {
-    const to = V1_TO_V2_SCHEDULE_KEYS[key];
+    const to = Object.hasOwn(V1_TO_V2_SCHEDULE_KEYS, key) ? V1_TO_V2_SCHEDULE_KEYS[key] : undefined;
     if (!to) throw new MigrationError(`"${key}" is not a version 1 schedule parameter`, childPointer("/schedule", key));
     setOwn(out, to, cloneJson(value));
   }
@@ -123,7 +123,7 @@ export function migrateOverlayV1toV2(overlay: object, options: OverlayMigrationO
   const below = isPlainObject(options.below) ? options.below : undefined;
   const out: JsonObject = {};
   for (const [key, value] of Object.entries(overlay)) {
-    const to = V1_TO_V2_PATHS[key];
+    const to = Object.hasOwn(V1_TO_V2_PATHS, key) ? V1_TO_V2_PATHS[key] : undefined;
     if (!to) throw new MigrationError(`"${key}" is not a version 1 parameter`, childPointer("", key));
     if (key === "parameterSetVersion") {
       if (value !== 1) throw new MigrationError("parameterSetVersion must be 1 in a version 1 overlay", "/parameterSetVersion");

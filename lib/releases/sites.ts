@@ -13,7 +13,7 @@ export const siteSchema = z.object({
   longitude: z.coerce.number({ error: "must be a number" }).min(-180, "must be at least -180").max(180, "must be at most 180"),
   timeZone: z.string().trim().refine(isKnownTimeZone, "must be an IANA time zone such as Europe/London"),
   contactName: z.string().trim().max(191).optional().transform((v) => v || null),
-  contactEmail: z.union([z.literal(""), z.email("must be an e-mail address")]).optional().transform((v) => v || null),
+  contactEmail: z.union([z.literal(""), z.email("must be an e-mail address").max(191, "must be at most 191 characters")]).optional().transform((v) => v || null),
 });
 
 /** Adds a site (technicians and admins). */

@@ -4,6 +4,7 @@ import type { SessionUser } from "@/lib/auth/guard";
 import { AppError } from "@/lib/http/errors";
 import { PARAMS_VERSIONS, validateParams, type ParamsVersion } from "@/lib/profiles/schemas";
 import { defaultDocument } from "@/lib/profiles/defaults";
+import { withinJsonDepth } from "@/lib/http/validation";
 
 export const createProfileSchema = z.object({
   layer: z.enum(["base", "site"], { error: "must be base or site" }),
@@ -15,7 +16,7 @@ export const createProfileSchema = z.object({
     .int()
     .refine((v) => (PARAMS_VERSIONS as readonly number[]).includes(v), `must be one of ${PARAMS_VERSIONS.join(", ")}`),
   /** Imported content; omitted → a base starts from the schema defaults, an overlay empty. */
-  content: z.record(z.string(), z.unknown(), { error: "must be a JSON object" }).optional(),
+  content: z.record(z.string(), z.unknown(), { error: "must be a JSON object" }).refine((v) => withinJsonDepth(v, 30), "must nest at most 30 levels deep").optional(),
   message: z.string().trim().max(500).optional(),
 });
 

@@ -17,6 +17,7 @@ import { isPlainObject } from "@/lib/profiles/json";
 import { mergeLayers } from "@/lib/profiles/merge";
 import { checkSafety, type SafetyContext, type SafetyFinding } from "@/lib/profiles/safety";
 import { validateParams, type ParamsVersion, type ValidationIssue } from "@/lib/profiles/schemas";
+import { withinJsonDepth } from "@/lib/http/validation";
 
 export type Evaluation = {
   schemaIssues: ValidationIssue[];
@@ -65,7 +66,7 @@ export async function evaluateProfileContent({ profile, version, content, now = 
 export const saveSchema = z.object({
   parentRevisionId: z.coerce.number().int().positive("must be the revision you edited"),
   message: z.string().trim().min(3, "Say in a few words what changed").max(500, "Keep the message under 500 characters"),
-  content: z.record(z.string(), z.unknown(), { error: "must be a JSON object" }),
+  content: z.record(z.string(), z.unknown(), { error: "must be a JSON object" }).refine((v) => withinJsonDepth(v, 30), "must nest at most 30 levels deep"),
 });
 
 /** Validates and saves a new revision; refuses (400 invalid_profile) content that fails its schema. */

@@ -96,8 +96,10 @@ const coordinate = (min: number, max: number) =>
 export const distanceInputSchema = z.object({ standard: standardSchema, lat: coordinate(-90, 90), lon: coordinate(-180, 180) });
 export type DistanceInput = z.infer<typeof distanceInputSchema>;
 
+const MAX_LOG_SPAN_MS = 2 * 60 * 60_000;
+
 const pulseSchema = z.object({
-  startMs: z.number({ error: "must be a number (ms)" }).min(0, "must be 0 or more"),
+  startMs: z.number({ error: "must be a number (ms)" }).min(0, "must be 0 or more").max(MAX_LOG_SPAN_MS * 12, "must be within a day of the log's start"),
   widthMs: z.number({ error: "must be a number (ms)" }).gt(0, "must be greater than 0").max(2000, "must be at most 2000"),
 });
 
@@ -107,7 +109,11 @@ export const pulseLogInputSchema = z.object({
   pulses: z
     .array(pulseSchema, { error: "must be a list of { startMs, widthMs }" })
     .min(1, "must hold at least one pulse")
-    .max(MAX_PULSES, `must hold at most ${MAX_PULSES} pulses (about 80 minutes)`),
+    .max(MAX_PULSES, `must hold at most ${MAX_PULSES} pulses (about 80 minutes)`)
+    // The decoder lays a frame on every minute the log spans, so the span is bounded as well as the count.
+    .refine((ps) => ps.length < 2 || Math.max(...ps.map((p) => p.startMs)) - Math.min(...ps.map((p) => p.startMs)) <= MAX_LOG_SPAN_MS, {
+      message: `must span at most ${MAX_LOG_SPAN_MS / 60_000} minutes from first to last pulse`,
+    }),
 });
 export type PulseLogInput = z.infer<typeof pulseLogInputSchema>;
 

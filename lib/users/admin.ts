@@ -11,7 +11,7 @@ export const roleSchema = z.enum(ROLES, { error: `must be one of ${ROLES.join(",
 
 export const inviteSchema = z.object({
   name: z.string().trim().min(1, "Enter the person's name").max(120, "Keep the name under 120 characters"),
-  email: z.string().trim().toLowerCase().pipe(z.email("Enter a valid e-mail address")),
+  email: z.string().trim().toLowerCase().max(191, "Keep the address under 191 characters").pipe(z.email("Enter a valid e-mail address")),
   role: roleSchema,
 });
 export type InviteInput = z.infer<typeof inviteSchema>;

@@ -1,10 +1,14 @@
 "use server";
-import { APIError } from "better-auth/api";
 import { headers } from "next/headers";
 import { z } from "zod";
 import { getAuth, MIN_PASSWORD_LENGTH } from "@/lib/auth/auth";
 import { requireUser } from "@/lib/auth/guard";
 import { type ActionResult, parseForm, runAction } from "@/lib/http/action";
+
+function isBadRequest(err: unknown): boolean {
+  const e = err as { status?: unknown; statusCode?: unknown } | null;
+  return !!e && (e.status === "BAD_REQUEST" || e.statusCode === 400);
+}
 
 const changePasswordSchema = z
   .object({
@@ -30,7 +34,8 @@ export async function changePasswordAction(_prev: ActionResult, form: FormData):
         body: { currentPassword: parsed.data.currentPassword, newPassword: parsed.data.newPassword, revokeOtherSessions: true },
       });
     } catch (err) {
-      if (err instanceof APIError && err.status === "BAD_REQUEST") {
+      // Checked by shape: the production bundle may hold more than one copy of the error class.
+      if (isBadRequest(err)) {
         return { ok: false, code: "invalid_request", message: "Check the highlighted fields.", fieldErrors: { currentPassword: "This is not your current password" } };
       }
       throw err;

@@ -11,7 +11,7 @@ const checkInSchema = z
   .object({
     appliedHash: z.string().regex(/^[0-9a-f]{64}$/, "must be the 64-character content hash applied").nullable(),
     refusedReason: z.string().trim().min(1).max(500).nullable().optional(),
-    firmwareVersion: z.string().regex(/^\d+\.\d+\.\d+([-+][0-9A-Za-z.-]+)?$/, "must be a version such as 1.4.2"),
+    firmwareVersion: z.string().max(32, "must be at most 32 characters").regex(/^\d+\.\d+\.\d+([-+][0-9A-Za-z.-]+)?$/, "must be a version such as 1.4.2"),
     uptimeS: count("seconds"),
     counters: z.object({
       doorCycles: count("cycles"),
