@@ -3,13 +3,21 @@
 import { readFileSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
+import { _ } from "ajv";
+import standaloneCode from "ajv/dist/standalone";
 import { compile, type JSONSchema } from "json-schema-to-typescript";
+import { createParamsAjv } from "@/lib/profiles/params-ajv";
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..");
 
 export const SCHEMA_TYPE_TARGETS = [
   { schema: "schemas/door-params-v1.schema.json", output: "schemas/generated/door-params-v1.ts", typeName: "DoorParamsV1" },
   { schema: "schemas/door-params-v2.schema.json", output: "schemas/generated/door-params-v2.ts", typeName: "DoorParamsV2" },
+] as const;
+
+export const VALIDATOR_TARGETS = [
+  { schema: "schemas/door-params-v1.schema.json", output: "schemas/generated/validate-v1.ts" },
+  { schema: "schemas/door-params-v2.schema.json", output: "schemas/generated/validate-v2.ts" },
 ] as const;
 
 type Node = Record<string, unknown>;
@@ -64,21 +72,39 @@ export async function renderSchemaTypes(schema: unknown, typeName: string, schem
   });
 }
 
+/** A schema's validator compiled ahead of time (ajv standalone), as a module of its own. */
+export function renderValidator(schema: object, schemaPath: string): string {
+  const ajv = createParamsAjv({ source: true, esm: true, formats: _`paramFormats` });
+  const code = standaloneCode(ajv, ajv.compile(schema)).replace(/^"use strict";/, "");
+  return [
+    `/* generated from ${schemaPath} by scripts/generate-schema-types.ts; do not edit */`,
+    "// @ts-nocheck",
+    'import { paramFormats } from "@/lib/profiles/schema-formats";',
+    code,
+    "",
+  ].join("\n");
+}
+
+function compare(root: string, output: string, content: string) {
+  let current: string | null = null;
+  try {
+    current = readFileSync(join(root, output), "utf8");
+  } catch {
+    current = null;
+  }
+  return { output, content, stale: current !== content };
+}
+
 /** Renders every target and reports which generated files differ from what is on disk. */
 export async function renderAll(root = ROOT): Promise<{ output: string; content: string; stale: boolean }[]> {
-  return Promise.all(
+  const types = await Promise.all(
     SCHEMA_TYPE_TARGETS.map(async (t) => {
       const schema: unknown = JSON.parse(readFileSync(join(root, t.schema), "utf8"));
-      const content = await renderSchemaTypes(schema, t.typeName, t.schema);
-      let current: string | null = null;
-      try {
-        current = readFileSync(join(root, t.output), "utf8");
-      } catch {
-        current = null;
-      }
-      return { output: t.output, content, stale: current !== content };
+      return compare(root, t.output, await renderSchemaTypes(schema, t.typeName, t.schema));
     }),
   );
+  const validators = VALIDATOR_TARGETS.map((t) => compare(root, t.output, renderValidator(JSON.parse(readFileSync(join(root, t.schema), "utf8")) as object, t.schema)));
+  return [...types, ...validators];
 }
 
 async function main(argv: string[]): Promise<number> {
