@@ -4,7 +4,13 @@ const securityHeaders = [
   { key: "Referrer-Policy", value: "same-origin" },
   { key: "X-Frame-Options", value: "DENY" },
   { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=()" },
+  { key: "Cross-Origin-Opener-Policy", value: "same-origin" },
+  // Browsers heed this only over HTTPS, where production runs; on plain-HTTP loopback it is ignored.
+  { key: "Strict-Transport-Security", value: "max-age=31536000; includeSubDomains" },
 ];
+
+// Pages get a per-request policy with a script nonce from proxy.ts; JSON answers need none of it.
+const apiHeaders = [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }];
 
 const nextConfig = {
   // Tests build into their own folder so they never disturb a running demo server.
@@ -14,7 +20,10 @@ const nextConfig = {
   experimental: { authInterrupts: true },
   serverExternalPackages: ["mysql2", "nodemailer"],
   async headers() {
-    return [{ source: "/:path*", headers: securityHeaders }];
+    return [
+      { source: "/:path*", headers: securityHeaders },
+      { source: "/api/:path*", headers: apiHeaders },
+    ];
   },
 };
 

@@ -1,4 +1,4 @@
-import { boolean, index, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, index, int, mysqlTable, text, timestamp, varchar } from "drizzle-orm/mysql-core";
 import { createdAt, updatedAt } from "./columns";
 
 // Tables used by better-auth (Drizzle adapter, usePlural) with its admin plugin.
@@ -68,3 +68,11 @@ export const verifications = mysqlTable(
   },
   (t) => [index("verifications_identifier_idx").on(t.identifier)],
 );
+
+/** Sign-in and reset attempts per client and path, kept in the database so every app instance counts them together. */
+export const rateLimits = mysqlTable("rate_limits", {
+  id: varchar("id", { length: 36 }).primaryKey(),
+  key: varchar("key", { length: 191 }).notNull().unique(),
+  count: int("count").notNull(),
+  lastRequest: bigint("last_request", { mode: "number" }).notNull(),
+});

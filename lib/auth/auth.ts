@@ -7,6 +7,7 @@ import * as schema from "@/db/schema";
 import { getEnv } from "@/lib/env";
 import { queuePasswordMail } from "@/lib/mail/outbox";
 import { ac, authRoles } from "./access";
+import { storedIdentifier } from "./verification-id";
 
 export const MIN_PASSWORD_LENGTH = 10;
 
@@ -30,6 +31,8 @@ function createAuth() {
         await queuePasswordMail({ userId: user.id, email: user.email, name: user.name, token });
       },
     },
+    // Invitation and reset links are checked against their hash, so a copy of the database opens no account.
+    verification: { storeIdentifier: { hash: async (identifier: string) => storedIdentifier(identifier) } },
     session: {
       expiresIn: 60 * 60 * 24 * 7,
       updateAge: 60 * 60 * 24,
@@ -38,6 +41,8 @@ function createAuth() {
     },
     rateLimit: {
       enabled: env.AUTH_RATE_LIMIT,
+      // In the database, so a second app instance does not give a guesser a second allowance.
+      storage: "database",
       window: 60,
       max: 100,
       customRules: { "/sign-in/email": { window: 10, max: 5 }, "/request-password-reset": { window: 60, max: 5 } },

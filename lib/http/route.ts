@@ -4,6 +4,25 @@ import { parseWith } from "./validation";
 
 const MAX_JSON_BYTES = 256 * 1024;
 
+/** The body as text, refused as soon as more than `maxBytes` have arrived (a body without a length is streamed). */
+async function readAtMost(request: Request, maxBytes: number): Promise<string> {
+  if (!request.body) return "";
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > maxBytes) {
+      await reader.cancel();
+      throw new AppError("invalid_request", `The body is larger than ${maxBytes / 1024} KiB.`);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
+
 /** Reads and validates a JSON body: 400 for a wrong content type, malformed JSON or a wrong shape. */
 export async function readJson<S extends z.ZodType>(request: Request, schema: S, { maxBytes = MAX_JSON_BYTES }: { maxBytes?: number } = {}): Promise<z.infer<S>> {
   const type = request.headers.get("content-type") ?? "";
@@ -14,10 +33,7 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S,
   if (declared > maxBytes) {
     throw new AppError("invalid_request", `The body is larger than ${maxBytes / 1024} KiB.`);
   }
-  const text = await request.text();
-  if (text.length > maxBytes) {
-    throw new AppError("invalid_request", `The body is larger than ${maxBytes / 1024} KiB.`);
-  }
+  const text = await readAtMost(request, maxBytes);
   let value: unknown;
   try {
     value = JSON.parse(text);

@@ -4,6 +4,7 @@ import { POST as invite } from "@/app/api/v1/users/route";
 import { db } from "@/db/client";
 import { verifications } from "@/db/schema";
 import { authRequest, signIn, signedInUser, tokenFrom, uniqueEmail, waitForMail, withCookie } from "@/tests/support/auth";
+import { storedIdentifier } from "@/lib/auth/verification-id";
 
 function inviteRequest(cookie: string, body: unknown) {
   return new Request("http://127.0.0.1:3100/api/v1/users", { method: "POST", headers: withCookie(cookie, { "content-type": "application/json" }), body: JSON.stringify(body) });
@@ -51,7 +52,7 @@ describe("invitation → accept → sign in", () => {
     await db
       .update(verifications)
       .set({ expiresAt: new Date(Date.now() - 60_000) })
-      .where(eq(verifications.identifier, `reset-password:${token}`));
+      .where(eq(verifications.identifier, storedIdentifier(`reset-password:${token}`)));
     const res = await authRequest("/reset-password", { token, newPassword: "too-late-password" });
     expect(res.status).toBe(400);
     expect(await res.json()).toMatchObject({ code: "INVALID_TOKEN" });

@@ -8,6 +8,24 @@ const jsonRequest = (body: string, type = "application/json") =>
   new Request("http://127.0.0.1/x", { method: "POST", headers: { "content-type": type }, body });
 
 describe("readJson", () => {
+  it("refuses a body without a length as soon as too much has arrived, without reading the rest", async () => {
+    let pulled = 0;
+    const chunk = new Uint8Array(10 * 1024).fill(32);
+    const body = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled++;
+        if (pulled > 1000) controller.close();
+        else controller.enqueue(chunk);
+      },
+    });
+    const request = new Request("http://x/y", { method: "POST", headers: { "content-type": "application/json" }, body, duplex: "half" } as RequestInit);
+    const err = await readJson(request, z.object({})).catch((e) => e);
+    expect(err).toBeInstanceOf(AppError);
+    expect(err.message).toContain("larger than 256 KiB");
+    expect(pulled).toBeLessThan(40);
+  });
+
+
   const schema = z.object({ n: z.number() });
 
   it("accepts a well-formed body", async () => {

@@ -31,6 +31,8 @@ export type BrowserSession = {
   foreignRequests: () => string[];
   /** Uncaught errors thrown in the page. */
   pageErrors: string[];
+  /** What the content security policy blocked (Chromium reports each as a console error). */
+  cspViolations: string[];
   close: () => Promise<void>;
 };
 
@@ -67,6 +69,10 @@ export async function openSession(options: SessionOptions = {}): Promise<Browser
   const pageErrors: string[] = [];
   context.on("request", (request) => requests.push(request.url()));
   context.on("weberror", (error) => pageErrors.push(String(error.error())));
+  const cspViolations: string[] = [];
+  context.on("console", (message) => {
+    if (/content security policy/i.test(message.text())) cspViolations.push(message.text());
+  });
   if (options.theme) {
     const theme = options.theme;
     await context.addInitScript((t) => {
@@ -83,6 +89,7 @@ export async function openSession(options: SessionOptions = {}): Promise<Browser
     page,
     requests,
     pageErrors,
+    cspViolations,
     foreignRequests: () => requests.filter((url) => !isLocal(url)),
     close: async () => {
       await context.close();
@@ -108,6 +115,7 @@ export async function withSession<T>(options: SessionOptions, body: (session: Br
     const result = await body(session);
     expect(session.foreignRequests(), "requests to hosts other than 127.0.0.1").toEqual([]);
     expect(session.pageErrors, "uncaught errors in the page").toEqual([]);
+    expect(session.cspViolations, "what the content security policy blocked").toEqual([]);
     return result;
   } finally {
     const foreign = session.foreignRequests();
