@@ -15,25 +15,33 @@ export function actionId(filename: string, exportedName: string): string {
 }
 
 /**
- * Posts `[prevState, formData]` to a useActionState action. React's encodeReply sends a
- * multipart body: field "0" holds the argument list, "$K1" points at the FormData, whose
- * entries travel as "_1_<name>" (react-server-dom: `"_" + partId + "_"`).
+ * Posts an action's argument list the way React's client does. encodeReply sends a multipart body:
+ * field "0" holds the argument list (`"$K1"` points at the FormData), whose entries travel as
+ * "_1_<name>" (react-server-dom: `"_" + partId + "_"`). Redirects are not followed, so a bounce to
+ * sign-in stays visible; `args` may be any string, to send a malformed list on purpose.
  */
-export async function callFormAction(opts: { pagePath: string; id: string; cookie: string; prevState: unknown; fields: Record<string, string> }) {
+export async function postAction(opts: { pagePath: string; id: string; headers?: Record<string, string>; origin?: string; args: unknown[] | string; fields: [string, string][] }) {
   const body = new FormData();
-  for (const [name, value] of Object.entries(opts.fields)) body.append(`_1_${name}`, value);
-  body.append("0", JSON.stringify([opts.prevState, "$K1"]));
+  for (const [name, value] of opts.fields) body.append(`_1_${name}`, value);
+  body.append("0", typeof opts.args === "string" ? opts.args : JSON.stringify(opts.args));
   const response = await fetch(appUrl(opts.pagePath), {
     method: "POST",
-    headers: { cookie: opts.cookie, "Next-Action": opts.id, Accept: "text/x-component", Origin: BASE_URL },
+    headers: { "Next-Action": opts.id, Accept: "text/x-component", Origin: opts.origin ?? BASE_URL, ...opts.headers },
     body,
+    redirect: "manual",
   });
   const text = await response.text();
-  return { status: response.status, text, result: actionResult(text) };
+  return { response, status: response.status, text, result: actionResult(text) };
+}
+
+/** Posts `[prevState, formData]` to a useActionState action with a session cookie. */
+export async function callFormAction(opts: { pagePath: string; id: string; cookie: string; prevState: unknown; fields: Record<string, string> }) {
+  const { status, text, result } = await postAction({ pagePath: opts.pagePath, id: opts.id, headers: { cookie: opts.cookie }, args: [opts.prevState, "$K1"], fields: Object.entries(opts.fields) });
+  return { status, text, result };
 }
 
 /** The action's return value in an RSC payload: the row that is an object with `ok`. */
-function actionResult(payload: string): Record<string, unknown> | null {
+export function actionResult(payload: string): Record<string, unknown> | null {
   for (const line of payload.split("\n")) {
     const match = /^[0-9a-f]+:(\{.*\})$/.exec(line);
     if (!match) continue;
