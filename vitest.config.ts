@@ -33,6 +33,21 @@ export default defineConfig({
         ...shared,
         test: { name: "e2e", include: ["tests/e2e/**/*.test.ts"], environment: "node", env: testEnv, fileParallelism: false, testTimeout: 60_000, hookTimeout: 60_000 },
       },
+      {
+        ...shared,
+        // Kills and restarts its own MariaDB and app instances, so it runs after the other projects.
+        test: {
+          name: "faults",
+          include: ["tests/faults/**/*.test.ts"],
+          environment: "node",
+          env: testEnv,
+          globalSetup: ["tests/faults/global-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+          sequence: { groupOrder: 1 },
+        },
+      },
     ],
   },
 });

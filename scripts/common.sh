@@ -6,7 +6,7 @@ export NEXT_TELEMETRY_DISABLED=1
 # mariadbd lives in /usr/sbin, which a non-login shell may not have on its PATH.
 export PATH="$PATH:/usr/local/sbin:/usr/sbin:/sbin"
 DATA_DIR="$ROOT/.data"
-DB_DIR="$DATA_DIR/mariadb"
+DB_DIR="${ROOSTLINE_DB_DIR:-$DATA_DIR/mariadb}"
 DB_PORT="${ROOSTLINE_DB_PORT:-3317}"
 DB_SOCKET="$DB_DIR/mariadb.sock"
 DB_PID="$DB_DIR/mariadb.pid"
