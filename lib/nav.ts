@@ -11,6 +11,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/releases", label: "Releases", permission: "controllers:read", description: "Approved revisions on their way to controllers" },
   { href: "/sites", label: "Sites", permission: "sites:read", description: "Farms and houses where doors run" },
   { href: "/tools", label: "Tools", permission: "tools:use", description: "Drive, stall, debounce, sun and time-code calculators" },
+  { href: "/help", label: "Help", permission: "dashboard:read", description: "Every parameter and safety rule in plain words, with cautions" },
   { href: "/audit", label: "Audit", permission: "audit:read", description: "Who changed what, and when" },
   { href: "/admin/users", label: "People", permission: "users:manage", description: "Invite colleagues and set their roles" },
   { href: "/admin/mail", label: "Mail", permission: "mail:read", description: "Outgoing mail and the local capture" },

@@ -323,7 +323,7 @@ export const openApiDocument: OpenApiDocument = {
         properties: {
           serial: { type: "string" },
           parameterSetVersion: { type: "integer", enum: [1, 2] },
-          parameters: { type: "object", description: "The effective parameters (base with the site's overlay on top), valid against the parameter-set JSON Schema whose $id is https://roostline.invalid/schemas/door-params/{parameterSetVersion} (for example https://roostline.invalid/schemas/door-params/2). The $id is a name, not a location: nothing is fetched." },
+          parameters: { type: "object", description: "The effective parameters (the base, then the site's overlay, then the controller's own overlay on top), valid against the parameter-set JSON Schema whose $id is https://roostline.invalid/schemas/door-params/{parameterSetVersion} (for example https://roostline.invalid/schemas/door-params/2). The $id is a name, not a location: nothing is fetched." },
           contentHash: { ...hex64, description: "SHA-256 (lower-case hex) of the canonical JSON of `parameters`; report it as `appliedHash`." },
           releaseId: id,
           baseRevisionId: id,

@@ -66,6 +66,6 @@ describe("navigation by role", () => {
   });
 
   it("shows the viewer the reading areas and nothing else", () => {
-    expect(navFor("viewer").map((n) => n.label)).toEqual(["Overview", "Profiles", "Controllers", "Releases", "Sites", "Tools"]);
+    expect(navFor("viewer").map((n) => n.label)).toEqual(["Overview", "Profiles", "Controllers", "Releases", "Sites", "Tools", "Help"]);
   });
 });
