@@ -6,7 +6,8 @@ import { canonicalJson } from "@/lib/profiles/canonical";
 /** A key as PEM text, as base64 DER (PKCS#8 for private, SPKI for public keys; the environment's form) or a KeyObject. */
 export type KeyInput = string | KeyObject;
 
-function privateKeyOf(key: KeyInput): KeyObject {
+/** The Ed25519 private key object for a key in any accepted form (parse once, sign many times). */
+export function privateKeyOf(key: KeyInput): KeyObject {
   const k = typeof key !== "string" ? key : key.includes("-----BEGIN") ? createPrivateKey(key) : createPrivateKey({ key: Buffer.from(key, "base64"), format: "der", type: "pkcs8" });
   if (k.type !== "private" || k.asymmetricKeyType !== "ed25519") throw new TypeError(`the signing key must be an Ed25519 private key, got ${k.asymmetricKeyType ?? "unknown"} ${k.type}`);
   return k;

@@ -1,5 +1,6 @@
 // Releases and what each controller is served: the effective configuration of the newest live
 // release that covers it and whose stage includes it, signed for the firmware to verify.
+import type { KeyObject } from "node:crypto";
 import { z } from "zod";
 import { getDoorModelForSafety, getSiteForSafety } from "@/db/queries/profile-context";
 import { getProfile, getRevisions } from "@/db/queries/profiles";
@@ -8,7 +9,7 @@ import type { SessionUser } from "@/lib/auth/guard";
 import { getEnv } from "@/lib/env";
 import { AppError } from "@/lib/http/errors";
 import { inStage } from "@/lib/fleet/stage";
-import { signPayload } from "@/lib/fleet/signing";
+import { privateKeyOf, signPayload } from "@/lib/fleet/signing";
 import { BoundedMap, GenerationCache } from "./config-cache";
 import { canonicalJson, contentHash } from "@/lib/profiles/canonical";
 import { diffParams, type DiffRow } from "@/lib/profiles/diff";
@@ -69,10 +70,13 @@ export async function assignmentFor(controller: ControllerRef): Promise<ReleaseR
 
 export type DeviceConfig = { body: string; etag: string; contentHash: string };
 
-function signingKey(): string {
-  const key = getEnv().DEVICE_SIGNING_KEY;
-  if (!key) throw new AppError("unavailable", "Configuration signing is not set up on this server.", { retryAfterSeconds: 300 });
-  return key;
+let parsedKey: { text: string; key: KeyObject } | undefined;
+
+function signingKey(): KeyObject {
+  const text = getEnv().DEVICE_SIGNING_KEY;
+  if (!text) throw new AppError("unavailable", "Configuration signing is not set up on this server.", { retryAfterSeconds: 300 });
+  if (parsedKey?.text !== text) parsedKey = { text, key: privateKeyOf(text) };
+  return parsedKey.key;
 }
 
 /** The signed configuration document a release gives a controller. */
