@@ -22,6 +22,11 @@ type Props = {
 };
 
 /** The head revision in the editor, with save (a new revision) and submit-for-review. */
+/** Moves focus to an element once React has rendered it. */
+function focusSoon(id: string) {
+  setTimeout(() => document.getElementById(id)?.focus(), 50);
+}
+
 export function RevisionWorkspace(props: Props) {
   const router = useRouter();
   const latest = useRef<WorkbenchState | null>(null);
@@ -61,6 +66,7 @@ export function RevisionWorkspace(props: Props) {
     setMessage("");
     setNotice("Saved as a new revision.");
     router.refresh();
+    focusSoon("workspace-notice");
   }
 
   function openSubmit() {
@@ -70,6 +76,7 @@ export function RevisionWorkspace(props: Props) {
       return;
     }
     setSubmitOpen(true);
+    focusSoon("submit-title");
   }
 
   const warnings = (latest.current?.findings ?? []).filter((f) => f.severity === "warning").filter((f, i, all) => all.findIndex((g) => g.ruleId === f.ruleId) === i);
@@ -92,13 +99,19 @@ export function RevisionWorkspace(props: Props) {
       return;
     }
     setSubmitOpen(false);
+    focusSoon("workspace-notice");
     setNotice(`Submitted. It needs ${result.data.requiredApprovals} approval${result.data.requiredApprovals > 1 ? "s" : ""} from reviewers other than you.`);
     router.refresh();
   }
 
   return (
     <div className="space-y-4">
-      {notice && <Notice tone="good">{notice}</Notice>}
+      {notice && (
+        // Focus lands here after a save or a submission: the workbench below remounts on the new revision.
+        <div id="workspace-notice" tabIndex={-1} className="outline-none">
+          <Notice tone="good">{notice}</Notice>
+        </div>
+      )}
       {error && (
         <Notice tone="bad" title={error.status === 409 ? "Not saved: someone was quicker" : "Not done"}>
           <p>{error.message}</p>
@@ -146,7 +159,7 @@ export function RevisionWorkspace(props: Props) {
       )}
       {submitOpen && (
         <div role="dialog" aria-modal="false" aria-labelledby="submit-title" className="rounded-lg border border-dusk-300 bg-dusk-50 p-4 dark:border-dusk-700 dark:bg-dusk-950">
-          <h2 id="submit-title" className="text-lg font-semibold">
+          <h2 id="submit-title" tabIndex={-1} className="text-lg font-semibold outline-none">
             Submit revision {props.revisionNumber} for review
           </h2>
           <p className="mt-1 text-sm">

@@ -38,7 +38,7 @@ type Tone = "neutral" | "good" | "warn" | "bad" | "info";
 const TONES: Record<Tone, string> = {
   neutral: "bg-loam-100 text-loam-800 dark:bg-loam-800 dark:text-loam-100",
   good: "bg-meadow-100 text-meadow-700 dark:bg-meadow-700 dark:text-meadow-100",
-  warn: "bg-straw-100 text-straw-700 dark:bg-straw-700 dark:text-straw-100",
+  warn: "bg-straw-100 text-straw-800 dark:bg-straw-800 dark:text-straw-100",
   bad: "bg-ember-100 text-ember-700 dark:bg-ember-700 dark:text-ember-100",
   info: "bg-dusk-100 text-dusk-700 dark:bg-dusk-700 dark:text-dusk-100",
 };
@@ -68,7 +68,8 @@ export function Notice({ tone = "info", title, children }: { tone?: Tone; title?
 /** A data table with our styling; columns are passed as header labels. */
 export function DataTable({ headers, children, caption }: { headers: string[]; children: ReactNode; caption?: string }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-loam-200 bg-white dark:border-loam-800 dark:bg-loam-900">
+    // Focusable, so a keyboard can scroll a table wider than the screen.
+    <div tabIndex={0} role="region" aria-label={caption ?? headers.join(", ")} className="overflow-x-auto rounded-lg border border-loam-200 bg-white dark:border-loam-800 dark:bg-loam-900">
       <table className="w-full text-left text-sm">
         {caption && <caption className="sr-only">{caption}</caption>}
         <thead className="border-b border-loam-200 bg-loam-50 text-xs uppercase tracking-wide text-loam-600 dark:border-loam-800 dark:bg-loam-950 dark:text-loam-400">

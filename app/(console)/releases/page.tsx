@@ -23,7 +23,7 @@ export default async function ReleasesPage() {
       {releases.length === 0 ? (
         <EmptyState title="Nothing released yet">An admin releases an approved base profile from its profile page, first to a share of the target.</EmptyState>
       ) : (
-        <DataTable caption="Releases" headers={canManage ? ["Release", "Profile", "Target", "Stage", "Adoption", "State", ""] : ["Release", "Profile", "Target", "Stage", "Adoption", "State"]}>
+        <DataTable caption="Releases" headers={canManage ? ["Release", "Profile", "Target", "Stage", "Adoption", "State", "Actions"] : ["Release", "Profile", "Target", "Stage", "Adoption", "State"]}>
           {releases.map(({ release: r, profileName, revisionNumber }, i) => {
             const a = adoption[i];
             return (
