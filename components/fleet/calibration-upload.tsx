@@ -3,7 +3,9 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { ProgressBar } from "@/components/ui/progress";
 import { Notice } from "@/components/ui/surface";
+import { useToast } from "@/components/ui/toast";
 import { apiJson, type ApiIssue } from "@/lib/http/client-fetch";
 import { RunPlot } from "./run-plot";
 
@@ -19,6 +21,7 @@ export function CalibrationUpload({ serial, canDraft }: { serial: string; canDra
   const [error, setError] = useState<{ message: string; issues: ApiIssue[] } | null>(null);
   const [result, setResult] = useState<Result | null>(null);
   const [draft, setDraft] = useState<{ profileId: number } | null>(null);
+  const { notify } = useToast();
 
   async function onFile(file: File | undefined) {
     setError(null);
@@ -31,14 +34,16 @@ export function CalibrationUpload({ serial, canDraft }: { serial: string; canDra
     setProgress(null);
     if (!r.ok) return setError({ message: r.error.message, issues: r.error.issues ?? [] });
     setResult(r.data);
+    notify({ tone: "success", title: `Calibration run ${r.data.runId} saved`, description: "Its plot and the suggested values are below." });
     router.refresh();
   }
 
   async function makeDraft() {
     if (!result) return;
     const r = await apiJson<{ profileId: number }>(`/api/v1/calibrations/${result.runId}/draft`, { body: {} });
-    if (r.ok) setDraft(r.data);
-    else setError({ message: r.error.message, issues: [] });
+    if (!r.ok) return setError({ message: r.error.message, issues: [] });
+    setDraft(r.data);
+    notify({ tone: "success", title: "Draft overlay saved", description: `An engineer submits it for review; only a release takes it to ${serial}.` });
   }
 
   return (
@@ -47,7 +52,8 @@ export function CalibrationUpload({ serial, canDraft }: { serial: string; canDra
         Recorded run (CSV: time_ms, counts; optional velocity_cps, open_sensor)
       </label>
       <input id="calibration-file" type="file" accept=".csv,text/csv" onChange={(e) => void onFile(e.target.files?.[0])} className="block text-sm" />
-      {progress !== null && <progress className="w-full" value={progress} max={1} aria-label="Upload progress" />}
+      {/* Once the bytes are sent the server still reads and analyses the run, for an unknown time. */}
+      {progress !== null && <ProgressBar label={progress < 1 ? "Uploading the run" : "Analysing the run"} value={progress < 1 ? progress : null} />}
       {error && (
         <Notice tone="bad" title="Not uploaded">
           <p>{error.message}</p>

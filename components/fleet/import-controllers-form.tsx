@@ -2,7 +2,9 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { ProgressBar } from "@/components/ui/progress";
 import { Notice } from "@/components/ui/surface";
+import { useToast } from "@/components/ui/toast";
 import { apiJson, type ApiIssue } from "@/lib/http/client-fetch";
 
 const MAX_BYTES = 1024 * 1024;
@@ -17,6 +19,7 @@ export function ImportControllersForm() {
   const [message, setMessage] = useState<{ tone: "good" | "bad"; text: string } | null>(null);
   const [tokensCsv, setTokensCsv] = useState<string | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
+  const { notify } = useToast();
 
   function onFile(file: File | undefined) {
     setText(null);
@@ -40,7 +43,9 @@ export function ImportControllersForm() {
       return;
     }
     setIssues(r.data.skipped);
-    setMessage({ tone: "good", text: `${r.data.imported.length} controller${r.data.imported.length === 1 ? "" : "s"} registered${r.data.skipped.length ? `; ${r.data.skipped.length} problem${r.data.skipped.length > 1 ? "s" : ""} skipped` : ""}.` });
+    const summary = `${r.data.imported.length} controller${r.data.imported.length === 1 ? "" : "s"} registered${r.data.skipped.length ? `; ${r.data.skipped.length} problem${r.data.skipped.length > 1 ? "s" : ""} skipped` : ""}.`;
+    setMessage({ tone: "good", text: summary });
+    notify({ tone: "success", title: "Controllers imported", description: r.data.imported.length > 0 ? `${summary} Download their tokens now; they are shown once.` : summary });
     setTokensCsv(["serial,token", ...r.data.imported.map((i) => `${i.serial},${i.token}`)].join("\n") + "\n");
     router.refresh();
   }
@@ -65,7 +70,8 @@ export function ImportControllersForm() {
         <input type="checkbox" checked={onlyGood} onChange={(e) => setOnlyGood(e.target.checked)} />
         Import the good rows even if others are wrong
       </label>
-      {progress !== null && <progress className="w-full" value={progress} max={1} aria-label="Upload progress" />}
+      {/* Once the file is sent the server checks and registers every row, for an unknown time. */}
+      {progress !== null && <ProgressBar label={progress < 1 ? "Uploading the file" : "Checking and registering the rows"} value={progress < 1 ? progress : null} />}
       <Button type="submit" variant="secondary" disabled={progress !== null}>
         Import
       </Button>

@@ -2,8 +2,10 @@
 import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog, doorCaution } from "@/components/ui/confirm-dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/surface";
+import { useToast } from "@/components/ui/toast";
 import { apiJson } from "@/lib/http/client-fetch";
 
 type Preview = { affected: number; inFirstStage: number; problems: { serial: string; reasons: string[] }[]; safetyChanges: { path: string; title: string | null; before?: unknown; after?: unknown; unit: string | null }[] };
@@ -16,6 +18,7 @@ export function ReleasePanel({ revisionId, revisionNumber, sites }: { revisionId
   const [done, setDone] = useState<number | null>(null);
   const [busy, setBusy] = useState(false);
   const [form, setForm] = useState({ siteId: sites[0]?.value ?? "", percent: "10", note: "" });
+  const { notify } = useToast();
 
   const body = () => ({
     baseRevisionId: revisionId,
@@ -36,8 +39,10 @@ export function ReleasePanel({ revisionId, revisionNumber, sites }: { revisionId
     setBusy(true);
     const r = await apiJson<{ releaseId: number }>("/api/v1/releases", { body: body() });
     setBusy(false);
-    if (r.ok) setDone(r.data.releaseId);
-    else setError(r.error.message);
+    if (r.ok) {
+      setDone(r.data.releaseId);
+      notify({ tone: "success", title: `Release ${r.data.releaseId} is live`, description: `r${revisionNumber} goes to ${form.percent} % of the target as controllers poll.` });
+    } else setError(r.error.message);
   }
 
   if (done) return <Notice tone="good">Released as release {done}. <Link href="/releases">Follow its adoption</Link>.</Notice>;
@@ -82,9 +87,23 @@ export function ReleasePanel({ revisionId, revisionNumber, sites }: { revisionId
           ) : (
             <>
               <p className="font-medium">Controllers will move doors with animals nearby on this configuration. Check that the first stage is doors someone can watch.</p>
-              <Button onClick={confirmRelease} disabled={busy}>
-                Release to {form.percent} %
-              </Button>
+              <ConfirmDialog
+                trigger={
+                  <Button disabled={busy}>
+                    Release to {form.percent} %
+                  </Button>
+                }
+                title={`Release r${revisionNumber} to ${form.percent} %?`}
+                description={`${preview.inFirstStage} of the ${preview.affected} controller${preview.affected === 1 ? "" : "s"} in the target are in the first stage and start on this configuration; the rest follow only when you widen the release.`}
+                caution={
+                  <>
+                    {preview.safetyChanges.length > 0 && <p className="mb-1 font-medium">It changes {preview.safetyChanges.length} safety-relevant value{preview.safetyChanges.length === 1 ? "" : "s"} (listed in the check).</p>}
+                    <p>{doorCaution(preview.inFirstStage)}</p>
+                  </>
+                }
+                confirmLabel="Yes, release"
+                onConfirm={confirmRelease}
+              />
             </>
           )}
         </div>

@@ -2,10 +2,15 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Notice } from "@/components/ui/surface";
+import { useToast } from "@/components/ui/toast";
 import { apiJson } from "@/lib/http/client-fetch";
 
 type PathOption = { path: string; label: string };
+
+const APPROVE_CAUTION =
+  "Stall detection is a second line of defence, not a guarantee: judge the travel, stall and timeout values as if it were not there. Once released, test the obstacle stop on site, and follow local codes and licensed practice for powered doors and animal-welfare rules.";
 
 /** Approve / request changes (bound to the hash on screen) and comments anchored to a parameter. */
 export function ReviewActions({ revisionId, contentHash, canDecide, canComment, paths, safetyRelevant }: { revisionId: number; contentHash: string; canDecide: boolean; canComment: boolean; paths: PathOption[]; safetyRelevant: boolean }) {
@@ -17,15 +22,16 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
   const [fieldError, setFieldError] = useState<string | undefined>();
   const [done, setDone] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  const { notify } = useToast();
 
   async function decide(decision: "approve" | "request_changes") {
     setError(null);
     setFieldError(undefined);
     if (decision === "request_changes" && !comment.trim()) {
       setFieldError("Say what should change.");
+      document.getElementById("decision-comment")?.focus();
       return;
     }
-    if (decision === "approve" && safetyRelevant && !window.confirm("This change touches safety-relevant parameters. Controllers will move doors with animals nearby on what you approve. Approve?")) return;
     setBusy(true);
     const r = await apiJson<{ state: string; approvals: number; required: number }>(`/api/v1/revisions/${revisionId}/decision`, { body: { decision, contentHash, comment: comment.trim() || undefined } });
     setBusy(false);
@@ -33,7 +39,9 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
       setError(r.error.message);
       return;
     }
-    setDone(r.data.state === "approved" ? "Approved." : r.data.state === "changes_requested" ? "Sent back to the author." : `Your approval is recorded (${r.data.approvals} of ${r.data.required}).`);
+    const outcome = r.data.state === "approved" ? "Approved." : r.data.state === "changes_requested" ? "Sent back to the author." : `Your approval is recorded (${r.data.approvals} of ${r.data.required}).`;
+    setDone(outcome);
+    notify({ tone: "success", title: r.data.state === "approved" ? "Revision approved" : r.data.state === "changes_requested" ? "Revision sent back" : "Approval recorded", description: outcome });
     router.refresh();
   }
 
@@ -49,6 +57,8 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
     }
     setNote("");
     router.refresh();
+    // The button disables itself once the note is cleared; keep the keyboard where the next comment goes.
+    document.getElementById("comment-body")?.focus();
   }
 
   return (
@@ -102,9 +112,25 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
             Your decision applies to content <code className="font-mono">{contentHash.slice(0, 12)}…</code>; any later revision needs a fresh review.
           </p>
           <div className="flex gap-2">
-            <Button onClick={() => decide("approve")} disabled={busy}>
-              Approve
-            </Button>
+            <ConfirmDialog
+              trigger={<Button disabled={busy}>Approve</Button>}
+              title="Approve this revision?"
+              description={
+                safetyRelevant ? (
+                  <p>
+                    This change touches safety-relevant parameters. Controllers will move doors with animals nearby on what you approve, once an admin releases it. Your approval
+                    applies to content <code className="font-mono">{contentHash.slice(0, 12)}…</code> only.
+                  </p>
+                ) : (
+                  <p>
+                    Your approval applies to content <code className="font-mono">{contentHash.slice(0, 12)}…</code> only; it reaches doors once an admin releases it.
+                  </p>
+                )
+              }
+              caution={safetyRelevant ? APPROVE_CAUTION : undefined}
+              confirmLabel="Yes, approve"
+              onConfirm={() => decide("approve")}
+            />
             <Button variant="secondary" onClick={() => decide("request_changes")} disabled={busy}>
               Send back
             </Button>

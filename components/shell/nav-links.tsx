@@ -1,6 +1,7 @@
 "use client";
 import Link from "next/link";
 import { usePathname } from "next/navigation";
+import { navTourId } from "@/lib/tour/targets";
 
 export type NavLink = { href: string; label: string };
 
@@ -21,6 +22,7 @@ export function NavLinks({ items, onNavigate }: { items: NavLink[]; onNavigate?:
               href={item.href}
               onClick={onNavigate}
               aria-current={active ? "page" : undefined}
+              data-tour={navTourId(item.href)}
               className={`block rounded-md px-3 py-2 text-sm font-medium no-underline hover:no-underline ${
                 active
                   ? "bg-dusk-100 text-dusk-800 dark:bg-dusk-800 dark:text-dusk-50"

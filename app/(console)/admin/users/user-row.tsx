@@ -1,7 +1,11 @@
 "use client";
-import { useActionState } from "react";
+import { useActionState, useEffect, useRef, type ComponentProps } from "react";
+import { useFormStatus } from "react-dom";
+import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Badge, Td } from "@/components/ui/surface";
 import { SubmitButton } from "@/components/ui/submit-button";
+import { useToast } from "@/components/ui/toast";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/permissions";
 import type { ActionResult } from "@/lib/http/action";
 import { changeRoleAction, deactivateUserAction, reactivateUserAction, resendInvitationAction } from "./actions";
@@ -20,6 +24,28 @@ function Result({ state }: { state: ActionResult }) {
   );
 }
 
+/** Toasts each successful result once; the inline line under the control stays as it was. */
+function useToastOnSuccess(state: ActionResult, title: string) {
+  const { notify } = useToast();
+  const shown = useRef(state);
+  useEffect(() => {
+    // Each action run returns a new object; the page's refresh after it must not toast it again.
+    if (shown.current === state) return;
+    shown.current = state;
+    if (state.ok && state.message) notify({ tone: "success", title, description: state.message });
+  }, [state, title, notify]);
+}
+
+// Opens the confirmation instead of submitting; shows the form's progress like SubmitButton does.
+function DeactivateButton(props: ComponentProps<typeof Button>) {
+  const { pending } = useFormStatus();
+  return (
+    <Button variant="danger" size="sm" {...props} disabled={pending || props.disabled} aria-busy={pending}>
+      {pending ? "Saving…" : "Deactivate"}
+    </Button>
+  );
+}
+
 export function UserRow(user: Props) {
   const [roleState, roleAction] = useActionState<ActionResult, FormData>(changeRoleAction, { ok: true });
   const [activeState, activeAction] = useActionState<ActionResult, FormData>(
@@ -27,6 +53,10 @@ export function UserRow(user: Props) {
     { ok: true },
   );
   const [inviteState, inviteAction] = useActionState<ActionResult, FormData>(resendInvitationAction, { ok: true });
+  const activeForm = useRef<HTMLFormElement>(null);
+  useToastOnSuccess(roleState, user.name);
+  useToastOnSuccess(activeState, user.name);
+  useToastOnSuccess(inviteState, user.name);
   const selectId = `role-${user.id}`;
   return (
     <tr data-user-email={user.email}>
@@ -67,18 +97,22 @@ export function UserRow(user: Props) {
               </SubmitButton>
             </form>
           )}
-          <form
-            action={activeAction}
-            onSubmit={(e) => {
-              if (user.status !== "deactivated" && !window.confirm(`Deactivate ${user.name}? Their sessions end at once and they can no longer sign in.`)) {
-                e.preventDefault();
-              }
-            }}
-          >
+          <form ref={activeForm} action={activeAction}>
             <input type="hidden" name="userId" value={user.id} />
-            <SubmitButton variant={user.status === "deactivated" ? "secondary" : "danger"} size="sm" pendingText="Saving…">
-              {user.status === "deactivated" ? "Reactivate" : "Deactivate"}
-            </SubmitButton>
+            {user.status === "deactivated" ? (
+              <SubmitButton variant="secondary" size="sm" pendingText="Saving…">
+                Reactivate
+              </SubmitButton>
+            ) : (
+              <ConfirmDialog
+                trigger={<DeactivateButton />}
+                title={`Deactivate ${user.name}?`}
+                description={`Their sessions end at once and they can no longer sign in. Their revisions, reviews and audit entries stay. You can reactivate ${user.email} later.`}
+                confirmLabel="Yes, deactivate"
+                destructive
+                onConfirm={() => activeForm.current?.requestSubmit()}
+              />
+            )}
           </form>
         </div>
         <Result state={activeState} />
