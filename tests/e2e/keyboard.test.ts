@@ -265,11 +265,12 @@ describe("keyboard operation", () => {
       await page.goto(appUrl(`/reviews/${revisionId}`));
       await waitForHydration(page, "#comment-body");
       await tabTo(page, "Approve", named("Approve"), log);
-      let asked: string | null = null;
-      page.once("dialog", (d) => {
-        asked = d.message();
-        void d.accept();
-      });
+      await page.keyboard.press("Enter");
+      // The confirm dialog opens with focus on Cancel; Tab reaches "Yes, approve".
+      const dialog = page.getByRole("alertdialog", { name: "Approve this revision?" });
+      const asked = await dialog.innerText();
+      await page.keyboard.press("Tab");
+      await expect.poll(() => page.evaluate(() => document.activeElement?.textContent?.trim())).toBe("Yes, approve");
       await page.keyboard.press("Enter");
       await status(page, /^Your approval is recorded \(1 of 2\)\.$|^Approved\.$/).waitFor();
       expect(asked ?? "", "a safety-relevant change asks before approving").toMatch(/safety-relevant/);

@@ -58,7 +58,7 @@ export default async function ReleasesPage() {
                 </Td>
                 {canManage && (
                   <Td>
-                    <ReleaseControls releaseId={r.id} percent={r.percent} state={r.state} />
+                    <ReleaseControls releaseId={r.id} percent={r.percent} state={r.state} inTarget={a?.target} />
                   </Td>
                 )}
               </tr>

@@ -210,7 +210,7 @@ export function ProfileWorkbench(props: ProfileWorkbenchProps) {
         </div>
       </div>
       {notice && <Notice tone={notice.tone}>{notice.text}</Notice>}
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0">
           <div role="tabpanel" id={panelId(prefix, "text")} aria-labelledby={tabId(prefix, "text")} hidden={view !== "text"} className="space-y-3">
             <SafetyCaution compact id={`${prefix}-caution`} />

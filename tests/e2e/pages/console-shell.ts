@@ -19,7 +19,7 @@ export class ConsoleShell {
 
   /** Opens the account menu and signs out; resolves on the sign-in page. */
   async signOut(): Promise<void> {
-    await this.page.locator('summary[aria-label^="Account menu for "]').click();
+    await this.page.locator("summary").filter({ hasText: "Account menu for" }).click();
     await this.page.getByRole("button", { name: "Sign out" }).click();
     await this.page.waitForURL((url) => url.pathname === "/sign-in");
   }

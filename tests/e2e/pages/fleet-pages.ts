@@ -1,4 +1,4 @@
-import type { Dialog, Locator, Page } from "playwright-core";
+import type { Locator, Page } from "playwright-core";
 import { appUrl, waitForHydration } from "../support/browser";
 
 /** The "Release rN" panel on a base profile's page (components/fleet/release-panel.tsx). */
@@ -33,6 +33,7 @@ export class ReleasePanel {
   /** Confirms the checked release; resolves with the new release's id. */
   async release(percent: number): Promise<number> {
     await this.releaseButton(percent).click();
+    await this.page.getByRole("alertdialog").getByRole("button", { name: "Yes, release", exact: true }).click();
     await this.released().waitFor();
     const text = await this.released().innerText();
     return Number(/release (\d+)/.exec(text)![1]);
@@ -71,15 +72,11 @@ export class ReleasesPage {
   async widen(releaseId: number, percent: number): Promise<string> {
     await waitForHydration(this.page, `#widen-${releaseId}`);
     await this.widenInput(releaseId).fill(String(percent));
-    let asked = "";
-    const onDialog = (dialog: Dialog) => {
-      asked = dialog.message();
-      void dialog.accept();
-    };
-    this.page.once("dialog", onDialog);
     await this.widenButton(releaseId).click();
+    const dialog = this.page.getByRole("alertdialog", { name: `Widen release ${releaseId} to ${percent} %?` });
+    const asked = await dialog.innerText();
+    await dialog.getByRole("button", { name: "Yes, widen", exact: true }).click();
     await this.row(releaseId).getByRole("cell", { name: `${percent} %`, exact: true }).waitFor();
-    this.page.off("dialog", onDialog);
     return asked;
   }
 }

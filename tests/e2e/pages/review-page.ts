@@ -1,4 +1,4 @@
-import type { Dialog, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { appUrl, waitForHydration } from "../support/browser";
 
 /** /reviews (the queue) and /reviews/[revisionId] (comparison, checks, comments and the decision). */
@@ -56,18 +56,14 @@ export class ReviewPage {
     await this.comparisonRow(path).filter({ hasText: text }).waitFor();
   }
 
-  /** Approves; a safety-relevant change asks window.confirm, which is accepted. Returns the confirm text, if asked. */
+  /** Approves through the confirm dialog (which repeats the safety caution for a safety-relevant change); returns its text. */
   async approve(note?: string): Promise<string | null> {
     if (note) await this.decisionNote().fill(note);
-    let asked: string | null = null;
-    const onDialog = (dialog: Dialog) => {
-      asked = dialog.message();
-      void dialog.accept();
-    };
-    this.page.once("dialog", onDialog);
     await this.approveButton().click();
+    const dialog = this.page.getByRole("alertdialog", { name: "Approve this revision?" });
+    const asked = await dialog.innerText();
+    await dialog.getByRole("button", { name: "Yes, approve", exact: true }).click();
     await this.decisionOutcome().or(this.error()).first().waitFor();
-    this.page.off("dialog", onDialog);
     return asked;
   }
 }

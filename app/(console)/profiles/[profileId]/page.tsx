@@ -72,7 +72,7 @@ export default async function ProfilePage({ params }: { params: Promise<{ profil
           <MigrateButton profileId={id} revisionId={head.id} />
         </div>
       )}
-      <div className="mt-4 grid gap-6 2xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-6 2xl:grid-cols-[minmax(0,1fr)_22rem]">
         <RevisionWorkspace
           profileId={id}
           revisionId={head.id}
