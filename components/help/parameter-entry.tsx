@@ -52,7 +52,7 @@ export function ParameterEntry({ p, safetyApprovals }: { p: ParameterHelp; safet
       <header className="mb-2 flex flex-wrap items-baseline gap-x-2 gap-y-1">
         <h3 className="text-base font-semibold">{p.title}</h3>
         {p.safety && <Badge tone="warn">safety-relevant</Badge>}
-        <a href={`#${p.anchor}`} className="ml-auto font-mono text-xs break-all" aria-label={`Link to ${p.title}`}>
+        <a href={`#${p.anchor}`} className="ml-auto font-mono text-xs break-all" title={`Link to ${p.title}`}>
           {p.path}
         </a>
       </header>

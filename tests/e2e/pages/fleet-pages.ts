@@ -55,7 +55,7 @@ export class ReleasesPage {
    * cell is found by its column (Release, Profile, Target, Stage, Adoption, …) instead.
    */
   readonly adoption = (releaseId: number) => this.row(releaseId).locator("td").nth(4);
-  readonly widenInput = (releaseId: number) => this.page.locator(`#widen-${releaseId}`);
+  readonly widenInput = (releaseId: number) => this.row(releaseId).locator(`#widen-${releaseId}`);
   readonly widenButton = (releaseId: number) => this.row(releaseId).getByRole("button", { name: "Widen", exact: true });
 
   async open(): Promise<void> {
