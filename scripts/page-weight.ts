@@ -23,8 +23,9 @@ import { runInNewContext } from "node:vm";
 const BUDGET_KB = 250;
 const EDITOR_ROUTE = "/profiles/[profileId]";
 const CHUNK_REF = /static\/chunks\/[A-Za-z0-9_.-]+\.js/g;
-// Text only Monaco's own code carries (its worker hook, its loader's messages, its CSS class names).
-const MONACO_MARKER = /MonacoEnvironment|@monaco-editor\/loader|\.monaco-editor\b/;
+// Text only Monaco's own code carries (its worker hook, its loader's messages) — not its CSS class
+// name, which the shortcuts name to ignore keys typed inside the editor.
+const MONACO_MARKER = /MonacoEnvironment|@monaco-editor\/loader/;
 const BOUNDARIES = new Set(["error", "global-error", "not-found", "forbidden", "unauthorized"]);
 const RENDERED = new Set(["layout", "template", "loading", "page"]);
 
