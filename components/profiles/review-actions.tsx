@@ -1,6 +1,6 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Notice } from "@/components/ui/surface";
@@ -15,6 +15,14 @@ const APPROVE_CAUTION =
 /** Approve / request changes (bound to the hash on screen) and comments anchored to a parameter. */
 export function ReviewActions({ revisionId, contentHash, canDecide, canComment, paths, safetyRelevant }: { revisionId: number; contentHash: string; canDecide: boolean; canComment: boolean; paths: PathOption[]; safetyRelevant: boolean }) {
   const router = useRouter();
+  // Focus to restore once a refresh has re-rendered the page (a disabled button would drop it).
+  const [refreshing, startRefresh] = useTransition();
+  const focusAfterRefresh = useRef<string | null>(null);
+  useEffect(() => {
+    if (refreshing || !focusAfterRefresh.current) return;
+    document.getElementById(focusAfterRefresh.current)?.focus();
+    focusAfterRefresh.current = null;
+  }, [refreshing]);
   const [comment, setComment] = useState("");
   const [note, setNote] = useState("");
   const [path, setPath] = useState(paths[0]?.path ?? "");
@@ -29,7 +37,7 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
     setFieldError(undefined);
     if (decision === "request_changes" && !comment.trim()) {
       setFieldError("Say what should change.");
-      document.getElementById("decision-comment")?.focus();
+      setTimeout(() => document.getElementById("decision-comment")?.focus(), 50);
       return;
     }
     setBusy(true);
@@ -56,9 +64,10 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
       return;
     }
     setNote("");
-    router.refresh();
     // The button disables itself once the note is cleared; keep the keyboard where the next comment goes.
     document.getElementById("comment-body")?.focus();
+    focusAfterRefresh.current = "comment-body";
+    startRefresh(() => router.refresh());
   }
 
   return (

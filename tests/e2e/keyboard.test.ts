@@ -282,6 +282,14 @@ describe("keyboard operation", () => {
   it("filters, sorts and pages a data table with keys only", async () => {
     const misses: string[] = [];
     const log = new FocusLog();
+    // Enough audit events for a second page (25 a page), however few other suites have written yet.
+    const { revisionId } = await makeProfile(false);
+    const engineer = demoUser("engineer");
+    const cookie = await apiSignIn(engineer.email, engineer.password);
+    for (let i = 0; i < 30; i++) {
+      const r = await api(cookie, "POST", `/api/v1/revisions/${revisionId}/comments`, { path: "/debounceMs", body: `Paging note ${i}` });
+      if (r.status !== 201) throw new Error(`comment: ${r.status} ${r.text}`);
+    }
     await withSession({ label: "keyboard-grid", viewport: DESKTOP, theme: "light" }, async ({ page }) => {
       await signIn(page, "admin");
       await page.goto(appUrl("/audit"));
