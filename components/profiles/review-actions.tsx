@@ -37,7 +37,7 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
     setFieldError(undefined);
     if (decision === "request_changes" && !comment.trim()) {
       setFieldError("Say what should change.");
-      setTimeout(() => document.getElementById("decision-comment")?.focus(), 50);
+      document.getElementById("decision-comment")?.focus();
       return;
     }
     setBusy(true);

@@ -175,8 +175,13 @@ describe("keyboard operation", () => {
       await page.keyboard.press("Enter");
       const panel = page.getByRole("dialog", { name: "Submit revision 2 for review" });
       await panel.waitFor();
+      // The panel takes focus once it has rendered; give it a moment.
+      let inPanel = false;
+      for (let i = 0; i < 20 && !inPanel; i++) {
+        inPanel = await panel.evaluate((d) => d.contains(document.activeElement));
+        if (!inPanel) await page.waitForTimeout(50);
+      }
       at = await focused(page);
-      const inPanel = await panel.evaluate((d) => d.contains(document.activeElement));
       if (!inPanel) {
         misses.push(
           `opening the submit panel leaves focus on ${at?.selector ?? "(body)"}; the panel (components/profiles/revision-workspace.tsx, role=dialog) sits above the workbench in DOM order, so a keyboard user must Shift+Tab back up to it — focus its first reason field (or heading) when it opens`,
