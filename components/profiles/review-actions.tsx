@@ -13,15 +13,21 @@ const APPROVE_CAUTION =
   "Stall detection is a second line of defence, not a guarantee: judge the travel, stall and timeout values as if it were not there. Once released, test the obstacle stop on site, and follow local codes and licensed practice for powered doors and animal-welfare rules.";
 
 /** Approve / request changes (bound to the hash on screen) and comments anchored to a parameter. */
+const FOCUS_KEY = "roostline-focus-after-refresh";
+
 export function ReviewActions({ revisionId, contentHash, canDecide, canComment, paths, safetyRelevant }: { revisionId: number; contentHash: string; canDecide: boolean; canComment: boolean; paths: PathOption[]; safetyRelevant: boolean }) {
   const router = useRouter();
   // Focus to restore once a refresh has re-rendered the page (a disabled button would drop it).
   const [refreshing, startRefresh] = useTransition();
   const focusAfterRefresh = useRef<string | null>(null);
+  // Kept in sessionStorage too, because the refreshed page may mount this form anew.
   useEffect(() => {
-    if (refreshing || !focusAfterRefresh.current) return;
-    document.getElementById(focusAfterRefresh.current)?.focus();
+    if (refreshing) return;
+    const id = focusAfterRefresh.current ?? sessionStorage.getItem(FOCUS_KEY);
+    if (!id) return;
+    document.getElementById(id)?.focus();
     focusAfterRefresh.current = null;
+    sessionStorage.removeItem(FOCUS_KEY);
   }, [refreshing]);
   const [comment, setComment] = useState("");
   const [note, setNote] = useState("");
@@ -67,6 +73,7 @@ export function ReviewActions({ revisionId, contentHash, canDecide, canComment, 
     // The button disables itself once the note is cleared; keep the keyboard where the next comment goes.
     document.getElementById("comment-body")?.focus();
     focusAfterRefresh.current = "comment-body";
+    sessionStorage.setItem(FOCUS_KEY, "comment-body");
     startRefresh(() => router.refresh());
   }
 
