@@ -27,7 +27,8 @@ const dayMs = (date: string) => {
 // The day's listing keeps only events on its own local date. When this evening's civil dusk is not
 // there (it comes after midnight, or a neighbouring day's dusk took the slot), take the crossing of the
 // date's own solar day, as events.ts numbers it, and place it relative to this date's midnight.
-function eveningDusk(day: SunDay, lat: number, lon: number, tz: string): Dusk {
+/** This evening's civil dusk for one day's listing (shared with the dashboard's one-day plan). */
+export function eveningDusk(day: SunDay, lat: number, lon: number, tz: string): Dusk {
   const own = day.civilDusk;
   if (own.time !== null && own.note === undefined) return { minute: own.minuteOfDay, afterMidnight: false };
   const [year, month, d] = day.date.split("-").map(Number);
@@ -40,7 +41,8 @@ function eveningDusk(day: SunDay, lat: number, lon: number, tz: string): Dusk {
   return { minute: null, missing: "other_day" };
 }
 
-function sunrise(day: SunDay): Sunrise {
+/** One day's sunrise as a plan entry. */
+export function sunrise(day: SunDay): Sunrise {
   const e = day.sunrise;
   return e.time !== null ? { minute: e.minuteOfDay } : { minute: null, missing: e.status };
 }
